@@ -1,0 +1,75 @@
+package org.swingclearance.audit;
+
+import java.nio.ByteBuffer;
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.HexFormat;
+
+/**
+ * The canonical encoding and SHA-256 hash of an audit row: the previous hash, then every field in a fixed
+ * order, each as a 4-byte length and its UTF-8 bytes (null as length -1), the time as epoch microseconds.
+ * Writer and verifier both use this class, so they can never disagree about what a row's hash covers.
+ */
+public final class AuditHashing {
+
+    /** The previous-hash of the first row of every chain. */
+    public static final byte[] GENESIS = new byte[32];
+
+    private AuditHashing() {
+    }
+
+    public static byte[] hash(AuditRecord r) {
+        MessageDigest sha = sha256();
+        sha.update(r.prevHash());
+        field(sha, r.chainId());
+        field(sha, Long.toString(r.seq()));
+        field(sha, r.eventId());
+        field(sha, Long.toString(micros(r.occurredAt())));
+        field(sha, r.clinicId());
+        field(sha, r.actorId());
+        field(sha, r.actorName());
+        field(sha, r.actorRole());
+        field(sha, r.action());
+        field(sha, r.objectType());
+        field(sha, r.objectId());
+        field(sha, r.patientId());
+        field(sha, r.outcome());
+        field(sha, r.clientAddress());
+        field(sha, r.requestId());
+        field(sha, r.detail());
+        return sha.digest();
+    }
+
+    public static Instant toStoredPrecision(Instant instant) {
+        return instant.truncatedTo(ChronoUnit.MICROS);
+    }
+
+    public static String hex(byte[] bytes) {
+        return HexFormat.of().formatHex(bytes);
+    }
+
+    private static long micros(Instant t) {
+        return Math.addExact(Math.multiplyExact(t.getEpochSecond(), 1_000_000L), t.getNano() / 1_000);
+    }
+
+    private static void field(MessageDigest sha, Object value) {
+        if (value == null) {
+            sha.update(ByteBuffer.allocate(4).putInt(-1).array());
+            return;
+        }
+        byte[] bytes = value.toString().getBytes(StandardCharsets.UTF_8);
+        sha.update(ByteBuffer.allocate(4).putInt(bytes.length).array());
+        sha.update(bytes);
+    }
+
+    private static MessageDigest sha256() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java runtime provides SHA-256", e);
+        }
+    }
+}

@@ -1,0 +1,6 @@
+package org.swingclearance.audit;
+
+/** How an audited attempt ended. */
+public enum AuditOutcome {
+    SUCCESS, DENIED, FAILED
+}
