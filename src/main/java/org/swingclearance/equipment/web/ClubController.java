@@ -23,7 +23,7 @@ import org.swingclearance.web.InvalidStateException;
 /**
  * The club inventory: list, add (with the guided pendulum measurement and a "compute" step that saves nothing),
  * edit and retire, for clinicians, managers and administrators of the clinic. Trainers reach only the read-only
- * club page, which the plan feature links to; every other inventory page answers them 403.
+ * club page ({@link ClubPageController}); every page here answers them 403.
  */
 @Controller
 @RequestMapping("/clubs")
@@ -32,7 +32,6 @@ class ClubController {
 
     static final String LIST = "equipment/clubs";
     static final String FORM = "equipment/club-form";
-    static final String DETAIL = "equipment/club";
 
     private final Clubs clubs;
 
@@ -81,14 +80,6 @@ class ClubController {
             errors.rejectValue(e.field(), e.messageKey(), e.args(), null);
             return FORM;
         }
-    }
-
-    /** The read-only club page; also open to trainers (the plan feature links here). */
-    @GetMapping("/{id}")
-    @PreAuthorize("hasAnyRole('CLINICIAN', 'MANAGER', 'ADMIN', 'TRAINER')")
-    String detail(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID id, Model model) {
-        model.addAttribute("page", clubs.page(me.staff(), id));
-        return DETAIL;
     }
 
     @GetMapping("/{id}/edit")
