@@ -170,6 +170,12 @@ public final class Citations {
     public static final Citation EWMA_CONVENTIONS = new Citation(
             "EWMA seed = first day's load; ratio suppressed for the first 28 days; missing days not counted as rest",
             COMMON_PRACTICE, NOT_STATED, "clinical.md §7.4");
+    public static final Citation IMPELLIZZERI_2021 = new Citation(
+            "Impellizzeri et al. 2021, Sports Med 51:581–592; Lolli et al. 2019, Br J Sports Med 53:921–922 (the "
+                    + "ratio adds no prediction; mathematical coupling)", VERIFIED, HIGH, "clinical.md §7.5");
+    public static final Citation CONFIGURATION_CHECK = new Citation(
+            "A logged configuration with a higher demand ratio than its plan step is flagged (product rule)",
+            COMMON_PRACTICE, NOT_STATED, "engine.md §7, §9");
     public static final Citation MECHANICAL_DOSE = new Citation(
             "Mechanical dose = Σ reps × demand-to-capacity ratio (product definition)", COMMON_PRACTICE, NOT_STATED,
             "engine.md §9");
