@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
+import java.util.stream.IntStream;
 import org.swingclearance.engine.envelope.Envelope;
 import org.swingclearance.engine.envelope.EnvelopeCalculator;
 import org.swingclearance.engine.envelope.LimitStatus;
@@ -41,18 +42,25 @@ final class EnvelopeComputation {
     private EnvelopeComputation() {
     }
 
-    /** Every club × pattern of the inputs, in club order then pattern order. */
+    /**
+     * Every club × pattern of the inputs, in club order then pattern order. The pairs are independent, so they are
+     * computed in parallel (the engine is stateless and thread-safe); the result does not depend on the order.
+     */
     static EnvelopeOutputs compute(EnvelopeInputs in) {
         Body body = body(in.body());
-        List<EnvelopeRow> rows = new ArrayList<>(in.clubs().size() * in.patterns().size());
+        List<Club> engineClubs = in.clubs().stream().map(EnvelopeComputation::club).toList();
+        int patternCount = in.patterns().size();
+        List<Judged> judged = IntStream.range(0, in.clubs().size() * patternCount).parallel()
+                .mapToObj(i -> row(body, in.clubs().get(i / patternCount), engineClubs.get(i / patternCount),
+                        in.patterns().get(i % patternCount), in))
+                .toList();
         Set<String> statements = new LinkedHashSet<>();
-        for (ClubView clubView : in.clubs()) {
-            Club club = club(clubView);
-            for (SwingPatternView patternView : in.patterns()) {
-                rows.add(row(body, clubView, club, patternView, in, statements));
-            }
-        }
-        return new EnvelopeOutputs(rows, notes(in), List.copyOf(statements));
+        judged.forEach(j -> statements.addAll(j.statements()));
+        return new EnvelopeOutputs(judged.stream().map(Judged::row).toList(), notes(in), List.copyOf(statements));
+    }
+
+    /** One row with the engine's statements of the model and search it used. */
+    private record Judged(EnvelopeRow row, List<String> statements) {
     }
 
     /** The what-if of one configuration with its chart series; {@code gripMarkM} is clamped to the handle. */
@@ -89,30 +97,30 @@ final class EnvelopeComputation {
                 gripSeries(configuration, capacity, rules), cycleSeries(configuration, capacity, rules));
     }
 
-    private static EnvelopeRow row(Body body, ClubView clubView, Club club, SwingPatternView patternView,
-                                   EnvelopeInputs in, Set<String> statements) {
+    private static Judged row(Body body, ClubView clubView, Club club, SwingPatternView patternView,
+                              EnvelopeInputs in) {
         double usualGrip = Math.min(USUAL_GRIP_M, club.handleLengthM());
         Capacity capacity = capacity(in.capacity(), patternView.hands());
         if (capacity == null) {
-            return unjudged(clubView, patternView, usualGrip, EnvelopeRow.NO_CAPACITY);
+            return new Judged(unjudged(clubView, patternView, usualGrip, EnvelopeRow.NO_CAPACITY), List.of());
         }
         Configuration configuration;
         try {
             configuration = new Configuration(body, club, usualGrip, pattern(patternView), in.cycleTimeS(),
                     Gravity.STANDARD);
         } catch (IllegalArgumentException cannotBeHeld) {
-            return unjudged(clubView, patternView, usualGrip, EnvelopeRow.INVALID);
+            return new Judged(unjudged(clubView, patternView, usualGrip, EnvelopeRow.INVALID), List.of());
         }
         Envelope e = EnvelopeCalculator.envelope(configuration, capacity, rules(in.rules(), in.capacity(),
                 patternView));
-        statements.addAll(e.atConfiguration().demand().assumptions());
+        List<String> statements = new ArrayList<>(e.atConfiguration().demand().assumptions());
         statements.addAll(e.assumptions());
         Assessment at = e.atConfiguration();
         boolean gripOk = e.furthestGrip().status() == LimitStatus.OK;
         boolean cycleOk = e.shortestCycle().status() == LimitStatus.OK;
         boolean massOk = e.heaviestMass().status() == LimitStatus.OK;
         Double furthestCm = gripOk ? e.furthestGrip().gripMarkM() * 100.0 : null;
-        return new EnvelopeRow(clubView.id(), clubView.name(), clubView.massKg(), clubView.inertiaSource(),
+        return new Judged(new EnvelopeRow(clubView.id(), clubView.name(), clubView.massKg(), clubView.inertiaSource(),
                 patternView.id(), patternView.name(), patternView.hands(), EnvelopeRow.COMPUTED, at.permitted(),
                 finite(at.demandRatio()), at.binding().name(), usualGrip * 100.0, furthestCm,
                 gripOk ? Math.max(0.0, furthestCm - usualGrip * 100.0) : null,
@@ -123,7 +131,7 @@ final class EnvelopeComputation {
                 cycleOk ? null : e.shortestCycle().verdict().binding().name(),
                 massOk ? e.heaviestMass().massKg() : null,
                 massOk ? null : e.heaviestMass().verdict().binding().name(),
-                e.maxHalfArcRad() == null ? null : Math.toDegrees(e.maxHalfArcRad()));
+                e.maxHalfArcRad() == null ? null : Math.toDegrees(e.maxHalfArcRad())), statements);
     }
 
     /** D across the handle at the configuration's cycle time; the gates (C4, C5) are not part of D. */
