@@ -3,14 +3,15 @@ package org.swingclearance.engine.plan;
 import java.util.Optional;
 
 /**
- * One step the plan could not take from its last state, and why.
+ * One step the plan cannot take, and why.
  *
+ * @param from       a state the plan can reach
  * @param position   the state the step would lead to (for {@link BlockReason#NO_SUCH_GRIP_MARK} a grid position
  *                   that is not a state of the space)
  * @param evaluation the evaluation of that state; empty for {@link BlockReason#NO_SUCH_GRIP_MARK}
  * @param rise       relative rise of D the step would bring (0.15 = +15 %); NaN when there is no evaluation
  */
-public record Blocker(Dial dial, PlanState position, BlockReason reason, Optional<Evaluation> evaluation,
+public record Blocker(PlanState from, Dial dial, PlanState position, BlockReason reason, Optional<Evaluation> evaluation,
                       double rise) {
 
     /** Message key; see engine.properties for its arguments. */

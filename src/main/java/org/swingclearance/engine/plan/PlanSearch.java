@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
-import java.util.function.Predicate;
 
 /**
  * The graded-plan search (engine.md §7). Built once per plan space and evaluator (every state is evaluated exactly
@@ -55,6 +54,7 @@ public final class PlanSearch {
         List<Integer> path = new ArrayList<>(List.of(StepGraph.node(startSlot, 0)));
         List<Integer> pinnedIndices = new ArrayList<>();
         Shortfall shortfall = null;
+        int goalSlot = waypoints.get(waypoints.size() - 1).slot();
         boolean mayCrossGate = request.provisionalContinuation();
         for (Waypoint waypoint : waypoints) {
             int current = path.get(path.size() - 1);
@@ -71,19 +71,22 @@ public final class PlanSearch {
                 }
                 continue;
             }
-            int fallback = waypoint.kind() == WaypointKind.HIGHEST_PERMITTED
-                    || waypoint.kind() == WaypointKind.HIGHEST_NEXT_BAND
-                    ? highestReached(leg, graph) : closestReached(leg, graph, waypoint.slot());
+            boolean towardHighest = waypoint.kind() == WaypointKind.HIGHEST_PERMITTED
+                    || waypoint.kind() == WaypointKind.HIGHEST_NEXT_BAND;
+            int fallback = towardHighest ? highestReached(leg, graph) : closestReached(leg, graph, waypoint.slot());
             append(path, leg.bestPathTo(fallback));
-            shortfall = shortfall(graph, waypoint, path.get(path.size() - 1));
+            if (towardHighest && graph.demandRatio(StepGraph.slot(fallback)) >= graph.demandRatio(waypoint.slot())) {
+                if (waypoint.slot() == goalSlot) {
+                    goalSlot = StepGraph.slot(fallback);
+                }
+                continue; // another state with the same highest D was reached: the goal is met
+            }
+            shortfall = shortfall(graph, waypoint, leg);
             break;
         }
         int last = path.get(path.size() - 1);
-        List<Blocker> ceiling = blockers(graph, last, mayCrossGate,
-                position -> space.contains(position) && graph.demandRatio(space.slotOf(position))
-                        > graph.demandRatio(StepGraph.slot(last)));
-        Waypoint goal = waypoints.get(waypoints.size() - 1);
-        return new Plan(steps(graph, rules, path, pinnedIndices), Optional.of(space.stateOfSlot(goal.slot())),
+        List<Blocker> ceiling = ceiling(graph, last, mayCrossGate);
+        return new Plan(steps(graph, rules, path, pinnedIndices), Optional.of(space.stateOfSlot(goalSlot)),
                 Optional.ofNullable(shortfall), ceiling);
     }
 
@@ -203,7 +206,7 @@ public final class PlanSearch {
         return Double.isInfinite(wantedD) ? -d : Math.abs(d - wantedD);
     }
 
-    private Shortfall shortfall(StepGraph graph, Waypoint waypoint, int lastNode) {
+    private Shortfall shortfall(StepGraph graph, Waypoint waypoint, LegFinder leg) {
         int slot = waypoint.slot();
         ShortfallReason reason;
         if (graph.isRemoved(slot)) {
@@ -216,23 +219,48 @@ public final class PlanSearch {
             reason = ShortfallReason.UNREACHABLE;
         }
         PlanState wanted = space.stateOfSlot(slot);
-        boolean towardHighest = waypoint.kind() == WaypointKind.HIGHEST_PERMITTED
-                || waypoint.kind() == WaypointKind.HIGHEST_NEXT_BAND;
-        PlanState at = space.stateOfSlot(StepGraph.slot(lastNode));
-        List<Blocker> blockers = blockers(graph, lastNode, waypoint.mayCrossGate(), towardHighest
-                ? position -> space.contains(position)
-                        && graph.demandRatio(space.slotOf(position)) > graph.demandRatio(StepGraph.slot(lastNode))
-                : position -> position.dialDistance(wanted) < at.dialDistance(wanted));
-        return new Shortfall(waypoint.kind(), wanted, reason, states.evaluation(slot), blockers);
+        return new Shortfall(waypoint.kind(), wanted, reason, states.evaluation(slot),
+                frontier(graph, leg, wanted, waypoint.mayCrossGate()));
     }
 
-    /** The adjacent positions of the last node that {@code wanted} selects and that cannot be stepped to, with why. */
-    private List<Blocker> blockers(StepGraph graph, int lastNode, boolean mayCrossGate,
-                                   Predicate<PlanState> wanted) {
+    /**
+     * The blocked steps toward {@code wanted}: from a reached state to an unreached adjacent position nearer the
+     * wanted state than every reached state. Non-empty whenever the wanted state is unreached, because the first step
+     * of a dial-by-dial route from the nearest reached state is one of them.
+     */
+    private List<Blocker> frontier(StepGraph graph, LegFinder leg, PlanState wanted, boolean mayCrossGate) {
+        int nearest = Integer.MAX_VALUE;
+        for (int i = 0; i < leg.reachedCount(); i++) {
+            nearest = Math.min(nearest, space.stateOfSlot(StepGraph.slot(leg.reachedNode(i))).dialDistance(wanted));
+        }
+        boolean[] seen = new boolean[space.slotCount()];
+        List<Blocker> blockers = new ArrayList<>();
+        for (int i = 0; i < leg.reachedCount(); i++) {
+            int node = leg.reachedNode(i);
+            if (seen[StepGraph.slot(node)]) {
+                continue; // the same state behind the gate adds nothing new
+            }
+            seen[StepGraph.slot(node)] = true;
+            for (PlanState position : space.adjacentPositions(space.stateOfSlot(StepGraph.slot(node)))) {
+                boolean reached = space.contains(position) && (leg.reached(StepGraph.node(space.slotOf(position), 0))
+                        || leg.reached(StepGraph.node(space.slotOf(position), 1)));
+                if (!reached && position.dialDistance(wanted) < nearest) {
+                    blocker(graph, node, position, mayCrossGate).ifPresent(blockers::add);
+                }
+            }
+        }
+        blockers.sort(Comparator.<Blocker>comparingInt(b -> b.position().dialDistance(wanted))
+                .thenComparing(Blocker::reason)); // stable: reached order, then dial order, within ties
+        return blockers;
+    }
+
+    /** The ceiling: the neighbours of the last node with a higher D that cannot be stepped to, with why. */
+    private List<Blocker> ceiling(StepGraph graph, int lastNode, boolean mayCrossGate) {
         PlanState at = space.stateOfSlot(StepGraph.slot(lastNode));
+        double d = graph.demandRatio(StepGraph.slot(lastNode));
         List<Blocker> blockers = new ArrayList<>();
         for (PlanState position : space.adjacentPositions(at)) {
-            if (wanted.test(position)) {
+            if (space.contains(position) && graph.demandRatio(space.slotOf(position)) > d) {
                 blocker(graph, lastNode, position, mayCrossGate).ifPresent(blockers::add);
             }
         }
@@ -244,7 +272,8 @@ public final class PlanSearch {
         PlanState from = space.stateOfSlot(StepGraph.slot(fromNode));
         Dial dial = PlanSpace.changedDial(from, position);
         if (!space.contains(position)) {
-            return Optional.of(new Blocker(dial, position, BlockReason.NO_SUCH_GRIP_MARK, Optional.empty(), Double.NaN));
+            return Optional.of(new Blocker(from, dial, position, BlockReason.NO_SUCH_GRIP_MARK, Optional.empty(),
+                    Double.NaN));
         }
         int slot = space.slotOf(position);
         double rise = graph.rise(StepGraph.slot(fromNode), slot);
@@ -260,7 +289,7 @@ public final class PlanSearch {
         } else {
             return Optional.empty();
         }
-        return Optional.of(new Blocker(dial, position, reason, Optional.of(states.evaluation(slot)), rise));
+        return Optional.of(new Blocker(from, dial, position, reason, Optional.of(states.evaluation(slot)), rise));
     }
 
     private List<PlanStep> steps(StepGraph graph, PlanRules rules, List<Integer> path, List<Integer> pinnedIndices) {

@@ -5,8 +5,10 @@ import java.util.Optional;
 
 /**
  * Why a plan ends before its goal ("cannot reach the target because …"): the waypoint it was heading for, the
- * reason, and the steps that are blocked from the plan's last state toward it (most fundamental first: constraints,
- * then the step limit, then removed states, then missing grip marks).
+ * reason, and the blocked steps on the way. A blocked step leads from a state the plan can reach to a position it
+ * cannot reach that lies nearer the wanted state (in dial steps) than any reachable state does; every way to the
+ * wanted state passes through one of them. They are ordered nearest to the wanted state first, then by reason
+ * (constraints, then the step limit, then removed states, then missing grip marks).
  */
 public record Shortfall(WaypointKind waypoint, PlanState wanted, ShortfallReason reason, Evaluation wantedEvaluation,
                         List<Blocker> blockers) {

@@ -7,6 +7,7 @@ public enum StepGate {
     /** The step is the first beyond the current band: the patient must be re-screened into the next band first. */
     RESCREEN_BEFORE;
 
+    /** Message key of the gate's text; {@link #NONE} has nothing to show. */
     public String messageKey() {
         return "engine.plan.gate." + name();
     }
