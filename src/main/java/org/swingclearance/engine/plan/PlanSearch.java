@@ -8,7 +8,7 @@ import java.util.Optional;
 /**
  * The graded-plan search (engine.md §7). Built once per plan space and evaluator (every state is evaluated exactly
  * once); {@link #plan} may then be called for any number of requests, e.g. while the clinician pins and removes
- * steps. Not thread-safe.
+ * steps. Immutable after construction, so {@link #plan} may run concurrently.
  *
  * <p>A plan is a chain of legs: start → each pinned state in order → goal. Without a target the goal is the
  * permitted state with the highest D in the current band; with a provisional continuation the plan then goes on to
