@@ -125,6 +125,7 @@ class PlanSearchProperties {
                 PlanState highest = highestReachable(reference, current, waypoint.mayCrossGate());
                 boolean sameHeight = reference.d(highest) >= reference.d(waypoint.state());
                 boolean wayStation = waypoint.kind() == WaypointKind.HIGHEST_PERMITTED && request.provisionalContinuation();
+                Statistics.label("highest state unreachable, plan goes on").collect(sameHeight || wayStation);
                 if (sameHeight || wayStation) {
                     wanted = highest;
                     best = reference.best(current, wanted, waypoint.mayCrossGate());
