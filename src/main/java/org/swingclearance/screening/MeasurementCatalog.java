@@ -16,12 +16,12 @@ public final class MeasurementCatalog {
 
     static {
         List<MeasurementField> fields = new ArrayList<>();
-        for (Measure measure : Measure.values()) {
-            if (measure.sided()) {
-                fields.add(MeasurementField.of(measure, Side.LEFT));
-                fields.add(MeasurementField.of(measure, Side.RIGHT));
+        for (Measurement measurement : Measurement.values()) {
+            if (measurement.sided()) {
+                fields.add(MeasurementField.of(measurement, Side.LEFT));
+                fields.add(MeasurementField.of(measurement, Side.RIGHT));
             } else {
-                fields.add(MeasurementField.of(measure, null));
+                fields.add(MeasurementField.of(measurement, null));
             }
         }
         for (Questionnaire questionnaire : Questionnaire.values()) {
@@ -47,9 +47,9 @@ public final class MeasurementCatalog {
     }
 
     /** The side-less measurements and sided pairs of a section, in form order. */
-    public static List<Measure> measures(ScreeningSection section) {
-        List<Measure> result = new ArrayList<>();
-        for (Measure m : Measure.values()) {
+    public static List<Measurement> measures(ScreeningSection section) {
+        List<Measurement> result = new ArrayList<>();
+        for (Measurement m : Measurement.values()) {
             if (m.section() == section) {
                 result.add(m);
             }

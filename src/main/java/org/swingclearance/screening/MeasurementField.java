@@ -9,17 +9,17 @@ import org.swingclearance.patient.Side;
  * Knows its storage key and checks a typed value against the measurement's range or the item's scale.
  *
  * @param key           storage and form key, e.g. {@code ACTIVE_FLEXION_LEFT} or {@code QUICKDASH_3}
- * @param measure       the measurement, null for a questionnaire item
+ * @param measurement   the measurement, null for a questionnaire item
  * @param side          the side, null for side-less measurements and items
  * @param questionnaire the questionnaire, null for measurements
  * @param item          1-based item number, 0 for measurements
  */
-public record MeasurementField(String key, Measure measure, Side side, Questionnaire questionnaire, int item) {
+public record MeasurementField(String key, Measurement measurement, Side side, Questionnaire questionnaire, int item) {
 
     private static final Pattern NUMBER = Pattern.compile("-?(\\d+(\\.\\d*)?|\\.\\d+)");
 
-    static MeasurementField of(Measure measure, Side side) {
-        return new MeasurementField(key(measure, side), measure, side, null, 0);
+    static MeasurementField of(Measurement measurement, Side side) {
+        return new MeasurementField(key(measurement, side), measurement, side, null, 0);
     }
 
     static MeasurementField item(Questionnaire questionnaire, int item) {
@@ -27,27 +27,27 @@ public record MeasurementField(String key, Measure measure, Side side, Questionn
     }
 
     /** The storage key of a measurement on a side (side null for side-less measurements). */
-    public static String key(Measure measure, Side side) {
-        if (measure.sided() != (side != null)) {
-            throw new IllegalArgumentException(measure + (measure.sided() ? " needs a side" : " has no side"));
+    public static String key(Measurement measurement, Side side) {
+        if (measurement.sided() != (side != null)) {
+            throw new IllegalArgumentException(measurement + (measurement.sided() ? " needs a side" : " has no side"));
         }
-        return side == null ? measure.name() : measure.name() + "_" + side.name();
+        return side == null ? measurement.name() : measurement.name() + "_" + side.name();
     }
 
     public MeasureUnit unit() {
-        return measure == null ? MeasureUnit.ITEM_POINTS : measure.unit();
+        return measurement == null ? MeasureUnit.ITEM_POINTS : measurement.unit();
     }
 
     public double min() {
-        return measure == null ? questionnaire.minResponse() : measure.min();
+        return measurement == null ? questionnaire.minResponse() : measurement.min();
     }
 
     public double max() {
-        return measure == null ? questionnaire.maxResponse() : measure.max();
+        return measurement == null ? questionnaire.maxResponse() : measurement.max();
     }
 
-    public Measure.Kind kind() {
-        return measure == null ? Measure.Kind.WHOLE : measure.kind();
+    public Measurement.Kind kind() {
+        return measurement == null ? Measurement.Kind.WHOLE : measurement.kind();
     }
 
     /**
@@ -71,14 +71,14 @@ public record MeasurementField(String key, Measure measure, Side side, Questionn
         if (!Double.isFinite(value)) {
             return Optional.of(new FieldProblem("screening.value.notNumber"));
         }
-        Measure.Kind kind = kind();
-        if ((kind == Measure.Kind.WHOLE || kind == Measure.Kind.YES_NO) && value != Math.rint(value)) {
+        Measurement.Kind kind = kind();
+        if ((kind == Measurement.Kind.WHOLE || kind == Measurement.Kind.YES_NO) && value != Math.rint(value)) {
             return Optional.of(new FieldProblem("screening.value.notWhole"));
         }
         if (questionnaire != null && (value < min() || value > max())) {
             return Optional.of(new FieldProblem("screening.value.scale", fmt(min()), fmt(max())));
         }
-        if (kind == Measure.Kind.POSITIVE && value <= min()) {
+        if (kind == Measurement.Kind.POSITIVE && value <= 0) {
             return Optional.of(new FieldProblem("screening.value.notPositive"));
         }
         if (value < min()) {

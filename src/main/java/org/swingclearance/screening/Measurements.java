@@ -57,13 +57,13 @@ public final class Measurements {
     }
 
     /** A side-less measurement, null when not tested. */
-    public Double get(Measure measure) {
-        return values.get(MeasurementField.key(measure, null));
+    public Double get(Measurement measurement) {
+        return values.get(MeasurementField.key(measurement, null));
     }
 
     /** A sided measurement, null when not tested. */
-    public Double get(Measure measure, Side side) {
-        return values.get(MeasurementField.key(measure, side));
+    public Double get(Measurement measurement, Side side) {
+        return values.get(MeasurementField.key(measurement, side));
     }
 
     /** The item responses of a questionnaire in item order, null for unanswered items. */

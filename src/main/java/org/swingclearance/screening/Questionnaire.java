@@ -6,9 +6,9 @@ package org.swingclearance.screening;
  */
 public enum Questionnaire {
     QUICKDASH(11, 1, 5, false),
-    OSWESTRY(10, 0, 5, false),
+    ODI(10, 0, 5, false),
     SPADI(13, 0, 10, true),
-    TSK11(11, 1, 4, true);
+    TSK_11(11, 1, 4, true);
 
     private final int items;
     private final int minResponse;
