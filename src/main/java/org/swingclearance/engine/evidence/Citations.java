@@ -74,6 +74,9 @@ public final class Citations {
     public static final Citation HICKS_2005_PIT = new Citation(
             "Hicks, Fritz, Delitto, McGill 2005, Arch Phys Med Rehabil 86:1753–1762 (prone instability test)",
             VERIFIED, HIGH, "clinical.md §3.4");
+    public static final Citation HICKS_2005_PREDICTORS = new Citation(
+            "Hicks et al. 2005 predictors: age < 40 y, average straight-leg raise > 91°, aberrant movement, positive "
+                    + "prone instability test", VERIFIED, HIGH, "clinical.md §3.4");
     public static final Citation HICKS_2005_RULE_COUNT = new Citation(
             "Hicks et al. 2005 stabilisation prediction rule, positive with ≥ 3 of 4 predictors (LR+ 4.0 verified; "
                     + "the count recalled)", FROM_MEMORY, MEDIUM, "clinical.md §3.4");
@@ -85,6 +88,10 @@ public final class Citations {
     public static final Citation BOHANNON_2006_STANCE = new Citation(
             "Bohannon 2006, Top Geriatr Rehabil 22:70–77 (unipedal stance, eyes open, ≥ 60 y)", VERIFIED, HIGH,
             "clinical.md §3.7");
+
+    public static final Citation QUICKDASH_CUT_POINTS = new Citation(
+            "QuickDASH cut-points 20/40/60 borrowed from the ODI bands: no QuickDASH severity bands are published",
+            COMMON_PRACTICE, NOT_STATED, "clinical.md §4.1–4.2");
 
     // §4 questionnaires
     public static final Citation QUICKDASH_SCORING = new Citation(
