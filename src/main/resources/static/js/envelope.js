@@ -42,11 +42,14 @@ document.addEventListener('DOMContentLoaded', () => {
     const points = series.map((p) => ({ x: p.x, y: p.d }));
     const xs = series.map((p) => p.x);
     const finite = series.map((p) => p.d).filter((d) => d !== null);
-    const top = Math.min(Math.max(1.5, ...finite, chosenD || 0) * 1.05, 4);
+    // Keep the permitted line in view: the axis grows with the demand up to 6 × the allowance, then clips.
+    const top = Math.min(Math.max(1.5, ...finite, chosenD || 0) * 1.05, 6);
     target.data.datasets[0].data = points;
     target.data.datasets[1].data = xs.length ? [{ x: Math.min(...xs), y: 1 }, { x: Math.max(...xs), y: 1 }] : [];
     target.data.datasets[2].data = chosenD === null ? [] : [{ x: chosenX, y: chosenD }];
     target.options.scales.y.max = top;
+    target.options.scales.x.min = xs.length ? Math.min(...xs) : undefined;
+    target.options.scales.x.max = xs.length ? Math.max(...xs) : undefined;
     target.update();
     const body = byId(tableId).querySelector('tbody');
     body.replaceChildren(...series.map((p) => {

@@ -64,6 +64,7 @@ class EnvelopeBrowserTests extends BrowserTestBase {
         browser.findElement(By.cssSelector("button[name=compute]")).click();
         await.until(ExpectedConditions.presenceOfElementLocated(By.id("inertia-estimate")));
         assertThat(field("inertia-estimate").getText()).contains("Plausible");
+        screenshot("club-pendulum-computed");
         double expected = new PendulumTiming(0.45, 20, 28.0).inertiaAboutBalancePointKgM2(6, Gravity.STANDARD);
         assertThat(field("estimate-value").getText()).startsWith(String.format(java.util.Locale.ROOT, "%.4f", expected));
         browser.findElement(By.cssSelector("main form button[type=submit]:not([name])")).click();
@@ -73,6 +74,7 @@ class EnvelopeBrowserTests extends BrowserTestBase {
         open("/episodes/" + episode + "/envelope");
         assertThat(pageText()).contains("Permitted envelope").contains("Club 6 kg, timed")
                 .contains("mechanical estimates from population tables");
+        screenshot("envelope-page");
         new Select(field("club")).selectByVisibleText("Club 6 kg, timed");
         new Select(field("pattern")).selectByVisibleText(PATTERN);
         slide("tempo", "1.6");

@@ -128,6 +128,9 @@ class EnvelopeIntegrationTests extends PostgresTestBase {
         assertThat(snapshots()).isZero();
         assertThat(envelopes.latest(clinician, episode)).isEmpty();
         assertThat(audited("ENVELOPE_READ")).isEqualTo(1);
+        // The patient page links each episode to its envelope (a PatientPanel of this feature).
+        mvc.perform(get("/patients/{id}", patient).with(data.as(clinician)))
+                .andExpect(content().string(Matchers.containsString("/episodes/" + episode + "/envelope")));
     }
 
     @Test
