@@ -1,6 +1,10 @@
 package org.swingclearance.envelope;
 
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.UUID;
+import java.util.stream.Collectors;
 import org.swingclearance.equipment.ClubView;
 import org.swingclearance.equipment.SwingPatternView;
 import org.swingclearance.patient.EpisodeSummary;
@@ -20,5 +24,16 @@ public record EnvelopePage(PatientSummary patient, EpisodeSummary episode, List<
 
     public boolean blocked() {
         return snapshot == null;
+    }
+
+    /** The snapshot's rows grouped by club, in the clubs' order (the page's table, one group per club). */
+    public List<ClubRows> table() {
+        Map<UUID, List<EnvelopeRow>> byClub = snapshot.rows().stream().collect(
+                Collectors.groupingBy(EnvelopeRow::clubId, LinkedHashMap::new, Collectors.toList()));
+        return clubs.stream().map(c -> new ClubRows(c, byClub.getOrDefault(c.id(), List.of()))).toList();
+    }
+
+    /** One club and its rows, one per swing pattern. */
+    public record ClubRows(ClubView club, List<EnvelopeRow> rows) {
     }
 }
