@@ -137,7 +137,7 @@ class ScreeningWebTests extends PostgresTestBase {
                 .andExpect(jsonPath("$.bands[0].band").value("BAND_1"))
                 .andExpect(jsonPath("$.findings[?(@.rule == 'shoulder.gird-ge-20')].line")
                         .value(Matchers.hasItem("25 ° (≥ 20 °): caps the shoulder band at Band 2.")))
-                .andExpect(jsonPath("$.findings[?(@.rule == 'shoulder.gird-ge-20')].evidence").value(Matchers.hasItem("verified")))
+                .andExpect(jsonPath("$.findings[?(@.rule == 'shoulder.gird-ge-20')].evidence").value(Matchers.hasItem("Verified")))
                 .andExpect(jsonPath("$.derived[?(@.key == 'QUICKDASH_SCORE')].value").value(Matchers.hasItem("40.91 points")))
                 .andExpect(jsonPath("$.fieldErrors").isEmpty());
         mvc.perform(form("/screenings/{id}/preview", null, "SHOULDER_FLEXION_ACTIVE_LEFT", "250"))

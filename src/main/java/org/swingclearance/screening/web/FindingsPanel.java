@@ -102,8 +102,14 @@ record FindingsPanel(List<ValueRow> derived, List<FindingRow> findings, List<Ban
             return messages.getMessage(code, args, code, locale);
         }
 
+        /** Label of a derived value: a value key, or one of the evaluator's per-side values. */
         String valueLabel(String key) {
-            return msg("ValueKey." + key);
+            for (ValueKey k : ValueKey.values()) {
+                if (k.name().equals(key)) {
+                    return msg("ValueKey." + key);
+                }
+            }
+            return msg("SideValue." + key);
         }
 
         /** A measurement slot as the engine names it, e.g. "SHOULDER_FLEXION_ACTIVE:LEFT". */
