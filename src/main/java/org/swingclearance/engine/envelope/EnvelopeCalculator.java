@@ -15,7 +15,7 @@ import org.swingclearance.engine.mechanics.Verdict;
  * Inverts the constraints of {@link Assessor} around one configuration (engine.md §6): the furthest grip from the
  * head, the shortest cycle time and the heaviest mass of the club's shape that are permitted. Each limit is found
  * by a 32-step scan from the demanding end of its range and bisection of the first edge to
- * 1e-7 relative, so every returned limit is permitted and any value 1 % beyond it is not. When no value in the range
+ * 1e-6 relative, so every returned limit is permitted and any value 1 % beyond it is not. When no value in the range
  * is permitted the limit is {@link LimitStatus#NOT_PERMISSIBLE}, never clipped. Stateless and thread-safe.
  */
 public final class EnvelopeCalculator {
@@ -28,7 +28,7 @@ public final class EnvelopeCalculator {
     public static final double MAX_CLUB_MASS_KG = 50.0;
 
     static final String SEARCH = "Each limit is the permitted value nearest the demanding end of its range, found"
-            + " by a 32-step scan and bisection to 1e-7 relative; a limit with nothing permitted in its range is"
+            + " by a 32-step scan and bisection to 1e-6 relative; a limit with nothing permitted in its range is"
             + " reported as not permissible, never clipped.";
     static final String SHAPE = "The heaviest mass keeps the club's shape: its balance point and radius of"
             + " gyration stay fixed while the mass changes.";

@@ -13,9 +13,9 @@ final class LimitSearch {
     /** Grid steps over the range. */
     static final int GRID = 32;
     /** Bisection stops when the bracket is below this fraction of the limit (engine.md §6 asks for 1e-4). */
-    static final double RELATIVE_TOLERANCE = 1e-7;
+    static final double RELATIVE_TOLERANCE = 1e-6;
     /** …or below this fraction of the range, for limits at or near zero. */
-    static final double RANGE_TOLERANCE = 1e-10;
+    static final double RANGE_TOLERANCE = 1e-9;
     private static final int DIP_ITERATIONS = 40;
     private static final double INVERSE_GOLDEN_RATIO = (Math.sqrt(5.0) - 1.0) / 2.0;
 

@@ -12,9 +12,14 @@ import java.util.function.DoubleUnaryOperator;
  */
 final class SwingLoads {
 
-    /** Samples per sampled profile; with refinement of every local peak the error is below 1e-9 relative. */
-    private static final int SAMPLES = 48;
-    private static final int GOLDEN_ITERATIONS = 24;
+    /**
+     * Samples per sampled profile. Between samples a peak can hide at most ½·|f''|·(h/2)², under 2 % for every
+     * profile here; refinement then brings the error far below 0.1 % (checked against closed forms in the tests).
+     */
+    private static final int SAMPLES = 32;
+    /** Sampled local peaks this close to the best sample (relative) are refined: they might be the true maximum. */
+    private static final double CONTENDER_WINDOW = 0.05;
+    private static final int GOLDEN_ITERATIONS = 20;
     private static final double INVERSE_GOLDEN_RATIO = (Math.sqrt(5.0) - 1.0) / 2.0;
     private static final double TWO_PI = 2.0 * Math.PI;
     private static final double HALF_PI = Math.PI / 2.0;
@@ -173,28 +178,34 @@ final class SwingLoads {
         return 60.0 * u * (1.0 - u) * (1.0 - 2.0 * u);
     }
 
-    /** Maximum of f on [a, b]: sampled, then every sampled local maximum refined by golden section. */
+    /**
+     * Maximum of f on [a, b]: sampled, then each sampled local maximum that could still be the largest (within
+     * {@link #CONTENDER_WINDOW} of the best sample, far more than the sampling error) refined by golden section.
+     */
     static double maxOver(DoubleUnaryOperator f, double a, double b) {
         double step = (b - a) / SAMPLES;
-        double previous = f.applyAsDouble(a);
-        double current = f.applyAsDouble(a + step);
-        double best = Math.max(previous, current);
-        if (previous >= current) {
-            best = Math.max(best, goldenMax(f, a, a + step));
+        double[] values = new double[SAMPLES + 1];
+        double best = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i <= SAMPLES; i++) {
+            values[i] = f.applyAsDouble(i == SAMPLES ? b : a + i * step);
+            best = Math.max(best, values[i]);
         }
-        for (int i = 1; i < SAMPLES; i++) {
-            double next = f.applyAsDouble(a + (i + 1) * step);
-            best = Math.max(best, next);
-            if (current >= previous && current >= next) {
-                best = Math.max(best, goldenMax(f, a + (i - 1) * step, a + (i + 1) * step));
+        double contender = best - CONTENDER_WINDOW * Math.abs(best);
+        double refined = best;
+        for (int i = 0; i <= SAMPLES; i++) {
+            double value = values[i];
+            if (value < contender) {
+                continue;
             }
-            previous = current;
-            current = next;
+            boolean peakBefore = i == 0 || value >= values[i - 1];
+            boolean peakAfter = i == SAMPLES || value >= values[i + 1];
+            if (peakBefore && peakAfter) {
+                double low = i == 0 ? a : a + (i - 1) * step;
+                double high = i == SAMPLES ? b : a + (i + 1) * step;
+                refined = Math.max(refined, goldenMax(f, low, high));
+            }
         }
-        if (current >= previous) {
-            best = Math.max(best, goldenMax(f, b - step, b));
-        }
-        return best;
+        return refined;
     }
 
     /**
