@@ -93,6 +93,12 @@ public class Patients {
         return new PatientPage(patient.summary(), eps, cons, refs);
     }
 
+    /** Refuses (404, audited) unless the patient belongs to the caller's clinic; for forms that fail validation. */
+    @Transactional(readOnly = true)
+    public PatientSummary requireOwn(CurrentStaff staff, UUID patientId, String action) {
+        return load(staff, patientId, action).summary();
+    }
+
     /** A patient of the caller's clinic for another feature; does not audit (the caller audits its own read). */
     @Transactional(readOnly = true)
     public Optional<PatientSummary> find(CurrentStaff staff, UUID patientId) {

@@ -30,6 +30,6 @@ class HomeController {
     }
 
     /** One rendered panel: its fragment's template and the data it receives. */
-    record Section(String template, Object data) {
+    public record Section(String template, Object data) {
     }
 }

@@ -112,6 +112,7 @@ class PatientController {
                   RedirectAttributes redirect) {
         model.addAttribute("patientId", id);
         if (errors.hasErrors()) {
+            patients.requireOwn(me.staff(), id, "PATIENT_UPDATE");
             return FORM;
         }
         try {
@@ -126,7 +127,7 @@ class PatientController {
 
     @GetMapping("/{id}/episodes/new")
     String newEpisode(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID id, Model model) {
-        model.addAttribute("patient", patients.page(me.staff(), id).patient());
+        model.addAttribute("patient", patients.requireOwn(me.staff(), id, "EPISODE_CREATE"));
         model.addAttribute("form", new EpisodeForm());
         return EPISODE_FORM;
     }
@@ -136,7 +137,7 @@ class PatientController {
                        @Valid @ModelAttribute("form") EpisodeForm form, BindingResult errors, Model model,
                        RedirectAttributes redirect) {
         if (errors.hasErrors()) {
-            model.addAttribute("patient", patients.page(me.staff(), id).patient());
+            model.addAttribute("patient", patients.requireOwn(me.staff(), id, "EPISODE_CREATE"));
             return EPISODE_FORM;
         }
         patients.openEpisode(me.staff(), id, form.toDetails());
@@ -208,6 +209,6 @@ class PatientController {
     }
 
     /** One rendered panel of another feature on the patient page. */
-    record Panel(String template, Object data) {
+    public record Panel(String template, Object data) {
     }
 }
