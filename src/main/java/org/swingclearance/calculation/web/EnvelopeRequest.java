@@ -5,8 +5,8 @@ import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.NotNull;
 import org.swingclearance.engine.mechanics.Capacity;
-import org.swingclearance.engine.mechanics.LoadBand;
 import org.swingclearance.engine.mechanics.LoadRules;
+import org.swingclearance.engine.rules.LoadBand;
 
 /**
  * {@code POST /api/v1/calculations/envelope}: the demand request's fields plus the capacity and the rules.

@@ -141,7 +141,7 @@ public final class Assessor {
             return Constraint.RANGE_OF_MOTION;
         }
         if (pattern.hipDriven() && (capacity.lumbopelvicBand() == null
-                || !capacity.lumbopelvicBand().reaches(rules.hipDriveMinimumBand()))) {
+                || capacity.lumbopelvicBand().isMoreRestrictiveThan(rules.hipDriveMinimumBand()))) {
             return Constraint.HIP_DRIVE;
         }
         return null;

@@ -17,6 +17,11 @@ final class SwingLoads {
      * profile here; refinement then brings the error far below 0.1 % (checked against closed forms in the tests).
      */
     private static final int SAMPLES = 32;
+    /**
+     * Samples for the energy turning points of the work integral: denser, because a turning point missed between
+     * two samples loses its whole rise (the work is computed only for the full demand, not in the search loops).
+     */
+    private static final int WORK_SAMPLES = 128;
     /** Sampled local peaks this close to the best sample (relative) are refined: they might be the true maximum. */
     private static final double CONTENDER_WINDOW = 0.05;
     private static final int GOLDEN_ITERATIONS = 20;
@@ -213,8 +218,8 @@ final class SwingLoads {
      * sequence with each sampled turning point replaced by its refined extreme value.
      */
     static double totalVariation(DoubleUnaryOperator f, double a, double b, boolean cyclic) {
-        int count = cyclic ? SAMPLES : SAMPLES + 1;
-        double step = (b - a) / SAMPLES;
+        int count = cyclic ? WORK_SAMPLES : WORK_SAMPLES + 1;
+        double step = (b - a) / WORK_SAMPLES;
         double[] values = new double[count];
         for (int i = 0; i < count; i++) {
             values[i] = f.applyAsDouble(a + i * step);
