@@ -78,6 +78,24 @@ public final class Assessor {
         return worst;
     }
 
+    /**
+     * The largest ratio of the load constraints that can only grow with moment arm and club mass and only shrink
+     * with a slower cycle time: C2 (hold torque, when the controlled-stop rule is on) and C3 (grip pull, when
+     * grip strength was measured); 0 when neither applies. A floor under {@link #demandRatio}: when it exceeds 1
+     * at the lenient end of an envelope range, nothing in the range is permitted.
+     */
+    public static double monotoneRatio(Configuration c, Capacity capacity, LoadRules rules) {
+        double worst = 0.0;
+        if (rules.controlledStop()) {
+            worst = ratio(DemandCalculator.holdTorqueNm(c), shoulderAllowance(capacity, rules));
+        }
+        if (capacity.gripStrengthKg() != null) {
+            worst = Math.max(worst, ratio(DemandCalculator.peakGripPullN(c), gripAllowance(capacity, rules,
+                    c.gravity())));
+        }
+        return worst;
+    }
+
     /** Whether the pattern passes the gates C4 (range of motion) and C5 (hip drive). */
     public static boolean patternAllowed(SwingPattern pattern, Capacity capacity, LoadRules rules) {
         return failedGate(pattern, capacity, rules) == null;
