@@ -26,14 +26,17 @@ import org.swingclearance.engine.envelope.EnvelopeCalculator;
 @Measurement(iterations = 5, time = 3)
 public class MechanicsBenchmark {
 
-    /** CASE-M80 (biomechanics.md §0.1) at standard gravity, rhythmic ±60° at 2 s. */
+    /**
+     * CASE-M80 (biomechanics.md §0.1) at standard gravity, gripped at 0.20 m, rhythmic ±60° at 2 s. With 60 N·m
+     * permitted every limit lies inside its range, so each inversion scans and bisects in full.
+     */
     private final Configuration rhythmic = new Configuration(Body.of(1.78, 80.0),
-            new Club(6.0, 0.60, 0.45, 0.30, ClubInertia.modelled(6.0, 0.60, 0.45, 0.50)), 0.05,
+            new Club(6.0, 0.60, 0.45, 0.30, ClubInertia.modelled(6.0, 0.60, 0.45, 0.50)), 0.20,
             SwingPattern.ofDegrees(0.0, 60.0, 1, 1.0, SwingKind.RHYTHMIC, false), 2.0, Gravity.STANDARD);
     /** The same club on a single minimum-jerk arc: every peak is sampled rather than closed-form. */
     private final Configuration singleArc = rhythmic.withPattern(
-            SwingPattern.ofDegrees(30.0, 60.0, 1, 1.0, SwingKind.SINGLE_ARC, false));
-    private final Capacity capacity = Capacity.of(90.0, 45.0);
+            SwingPattern.ofDegrees(0.0, 60.0, 1, 1.0, SwingKind.SINGLE_ARC, false));
+    private final Capacity capacity = Capacity.of(100.0, 45.0);
     private final LoadRules rules = LoadRules.forFraction(0.6);
 
     @Benchmark

@@ -63,7 +63,7 @@ public final class Assessor {
 
     /**
      * D alone: the largest ratio of the load constraints C1–C3 that apply (the gates C4, C5 are ignored here).
-     * The margin function of the envelope inversions; allocation-free apart from the sampled profiles.
+     * The margin function of the envelope inversions: no demand record, no sentences, only the peaks it needs.
      */
     public static double demandRatio(Configuration c, Capacity capacity, LoadRules rules) {
         double allowance = shoulderAllowance(capacity, rules);
