@@ -26,7 +26,7 @@ final class SwingLoads {
     private static final int WORK_SAMPLES = 64;
     /** Sampled local peaks this close to the best sample (relative) are refined: they might be the true maximum. */
     private static final double CONTENDER_WINDOW = 0.05;
-    private static final int GOLDEN_ITERATIONS = 20;
+    private static final int GOLDEN_ITERATIONS = 14;
     private static final double INVERSE_GOLDEN_RATIO = (Math.sqrt(5.0) - 1.0) / 2.0;
     private static final double TWO_PI = 2.0 * Math.PI;
     private static final double HALF_PI = Math.PI / 2.0;
