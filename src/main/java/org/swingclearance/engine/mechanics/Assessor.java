@@ -37,45 +37,21 @@ public final class Assessor {
 
     /** The verdict for a configuration: permitted, demand ratio D and binding constraint. */
     public static Verdict verdict(Configuration c, Capacity capacity, LoadRules rules) {
-        Constraint gate = failedGate(c.pattern(), capacity, rules);
-        double torque = ratio(DemandCalculator.peakShoulderTorqueNm(c), shoulderAllowance(capacity, rules));
-        double worst = torque;
-        Constraint binding = Constraint.SHOULDER_TORQUE;
-        if (rules.controlledStop()) {
-            double hold = ratio(DemandCalculator.holdTorqueNm(c), shoulderAllowance(capacity, rules));
-            if (hold > worst) {
-                worst = hold;
-                binding = Constraint.HOLD_TORQUE;
-            }
-        }
-        if (capacity.gripStrengthKg() != null) {
-            double grip = ratio(DemandCalculator.peakGripPullN(c), gripAllowance(capacity, rules, c.gravity()));
-            if (grip > worst) {
-                worst = grip;
-                binding = Constraint.GRIP_PULL;
-            }
-        }
-        if (gate != null) {
-            return new Verdict(false, worst, gate);
-        }
-        return new Verdict(worst <= 1.0, worst, binding);
+        double allowance = shoulderAllowance(capacity, rules);
+        return judge(failedGate(c.pattern(), capacity, rules),
+                ratio(DemandCalculator.peakShoulderTorqueNm(c), allowance),
+                rules.controlledStop() ? ratio(DemandCalculator.holdTorqueNm(c), allowance) : Double.NaN,
+                capacity.gripStrengthKg() != null
+                        ? ratio(DemandCalculator.peakGripPullN(c), gripAllowance(capacity, rules, c.gravity()))
+                        : Double.NaN);
     }
 
     /**
-     * D alone: the largest ratio of the load constraints C1–C3 that apply (the gates C4, C5 are ignored here).
-     * The margin function of the envelope inversions: no demand record, no sentences, only the peaks it needs.
+     * D alone: the largest ratio of the load constraints C1–C3 that apply; the gates C4 and C5 do not change it.
+     * The margin function of the envelope inversions.
      */
     public static double demandRatio(Configuration c, Capacity capacity, LoadRules rules) {
-        double allowance = shoulderAllowance(capacity, rules);
-        double worst = ratio(DemandCalculator.peakShoulderTorqueNm(c), allowance);
-        if (rules.controlledStop()) {
-            worst = Math.max(worst, ratio(DemandCalculator.holdTorqueNm(c), allowance));
-        }
-        if (capacity.gripStrengthKg() != null) {
-            worst = Math.max(worst, ratio(DemandCalculator.peakGripPullN(c), gripAllowance(capacity, rules,
-                    c.gravity())));
-        }
-        return worst;
+        return verdict(c, capacity, rules).demandRatio();
     }
 
     /**
@@ -127,17 +103,7 @@ public final class Assessor {
         if (gate == Constraint.HIP_DRIVE) {
             notes.add(HIP_DRIVE_EXCLUDED);
         }
-        double worst = torque;
-        Constraint binding = Constraint.SHOULDER_TORQUE;
-        if (hold != null && hold > worst) {
-            worst = hold;
-            binding = Constraint.HOLD_TORQUE;
-        }
-        if (grip != null && grip > worst) {
-            worst = grip;
-            binding = Constraint.GRIP_PULL;
-        }
-        Verdict verdict = gate != null ? new Verdict(false, worst, gate) : new Verdict(worst <= 1.0, worst, binding);
+        Verdict verdict = judge(gate, torque, hold != null ? hold : Double.NaN, grip != null ? grip : Double.NaN);
         return new Assessment(demand, capacity, rules, verdict, torque, hold, grip, maxHalfArc, notes,
                 EngineVersion.ENGINE_VERSION);
     }
@@ -152,6 +118,24 @@ public final class Assessor {
         }
         double allowed = capacity.shoulderFlexionRangeRad() - rules.rangeMarginRad() - pattern.centreRad();
         return Math.max(0.0, Math.min(Math.PI, allowed));
+    }
+
+    /**
+     * D is the largest load ratio that applies (NaN marks one that does not); a failed gate decides the binding
+     * constraint and refuses the configuration whatever D is.
+     */
+    private static Verdict judge(Constraint gate, double torque, double hold, double grip) {
+        double worst = torque;
+        Constraint binding = Constraint.SHOULDER_TORQUE;
+        if (hold > worst) {
+            worst = hold;
+            binding = Constraint.HOLD_TORQUE;
+        }
+        if (grip > worst) {
+            worst = grip;
+            binding = Constraint.GRIP_PULL;
+        }
+        return gate != null ? new Verdict(false, worst, gate) : new Verdict(worst <= 1.0, worst, binding);
     }
 
     private static Constraint failedGate(SwingPattern pattern, Capacity capacity, LoadRules rules) {
