@@ -72,6 +72,7 @@ class EnvelopeBrowserTests extends BrowserTestBase {
         assertThat(pageText()).contains("Club 6 kg, timed").contains("measured").contains("Club added");
 
         open("/episodes/" + episode + "/envelope");
+        String envelopeUrl = browser.getCurrentUrl();
         assertThat(pageText()).contains("Permitted envelope").contains("Club 6 kg, timed")
                 .contains("mechanical estimates from population tables");
         screenshot("envelope-page");
@@ -91,6 +92,8 @@ class EnvelopeBrowserTests extends BrowserTestBase {
         slide("grip", "22");
         awaitBinding(atHandleEnd);
         assertThat(field("grip-value").getText()).isEqualTo("22.0 cm");
+        // Updated in place: no page load happened.
+        assertThat(browser.getCurrentUrl()).isEqualTo(envelopeUrl);
         // The charts were drawn by Chart.js from the server's numbers; their table alternative follows the panel.
         assertThat(((JavascriptExecutor) browser).executeScript(
                 "return Chart.getChart(document.getElementById('chart-grip')).data.datasets[0].data.length"))

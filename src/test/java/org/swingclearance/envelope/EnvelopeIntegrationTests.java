@@ -222,6 +222,10 @@ class EnvelopeIntegrationTests extends PostgresTestBase {
         assertThat(w.peakShoulderTorqueNm()).isEqualTo(a.demand().peakShoulderTorqueNm());
         assertThat(w.bindingLabel()).endsWith("(" + a.binding().code() + ")");
         assertThat(audited("ENVELOPE_WHATIF")).isEqualTo(1);
+        mvc.perform(post("/episodes/{id}/envelope/what-if", episode).with(csrf()).with(data.as(clinician))
+                        .param("club", six.id().toString()).param("pattern", arc.id().toString())
+                        .param("gripCm", "NaN").param("cycleTimeS", "1.6"))
+                .andExpect(status().isBadRequest());
     }
 
     @Test

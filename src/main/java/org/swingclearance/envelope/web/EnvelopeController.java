@@ -24,6 +24,7 @@ import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.ResponseBody;
+import org.springframework.web.server.ResponseStatusException;
 import org.swingclearance.envelope.EnvelopePage;
 import org.swingclearance.envelope.Envelopes;
 import org.swingclearance.envelope.WhatIf;
@@ -82,6 +83,9 @@ class EnvelopeController {
     WhatIf whatIf(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID episodeId,
                   @RequestParam UUID club, @RequestParam UUID pattern, @RequestParam double gripCm,
                   @RequestParam double cycleTimeS) {
+        if (!Double.isFinite(gripCm) || !Double.isFinite(cycleTimeS)) {
+            throw new ResponseStatusException(HttpStatus.BAD_REQUEST, "grip mark and cycle time must be numbers");
+        }
         return envelopes.whatIf(me.staff(), episodeId, club, pattern, gripCm, cycleTimeS);
     }
 
