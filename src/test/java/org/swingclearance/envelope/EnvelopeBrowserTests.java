@@ -76,6 +76,9 @@ class EnvelopeBrowserTests extends BrowserTestBase {
         assertThat(pageText()).contains("Permitted envelope").contains("Club 6 kg, timed")
                 .contains("mechanical estimates from population tables");
         screenshot("envelope-page");
+        ((JavascriptExecutor) browser).executeScript("arguments[0].scrollIntoView()",
+                browser.findElement(By.cssSelector(".envelope-table")));
+        screenshot("envelope-table");
         new Select(field("club")).selectByVisibleText("Club 6 kg, timed");
         new Select(field("pattern")).selectByVisibleText(PATTERN);
         slide("tempo", "1.6");
