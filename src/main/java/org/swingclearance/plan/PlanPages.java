@@ -4,6 +4,7 @@ import java.time.Clock;
 import java.time.LocalDate;
 import java.util.List;
 import java.util.Objects;
+import java.util.UUID;
 import org.springframework.stereotype.Component;
 import org.swingclearance.equipment.Clubs;
 import org.swingclearance.equipment.SwingPatternView;
@@ -43,8 +44,10 @@ class PlanPages {
     PlanPage page(CurrentStaff clinician, EpisodeSummary episode, GradedPlan plan) {
         String blocked = assembler.blocker(clinician, episode).orElse(null);
         List<SwingPatternView> library = patterns.all(clinician);
-        PlanSettings defaults = drafting.defaults(clinician, library.isEmpty() ? null : library.get(0).id(),
-                LocalDate.now(clock));
+        // Default to the first pattern that is not hip-driven: it needs no lumbopelvic band (C5).
+        UUID firstPattern = library.stream().filter(p -> !p.hipDriven()).findFirst()
+                .or(() -> library.stream().findFirst()).map(SwingPatternView::id).orElse(null);
+        PlanSettings defaults = drafting.defaults(clinician, firstPattern, LocalDate.now(clock));
         List<PlanVersionView> history = plan == null ? List.of()
                 : versions.findByClinicIdAndPlanIdOrderByNumberDesc(clinician.clinicId(), plan.getId()).stream()
                         .map(v -> views.version(clinician, v)).toList();

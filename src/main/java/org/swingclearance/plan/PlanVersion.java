@@ -1,5 +1,6 @@
 package org.swingclearance.plan;
 
+import jakarta.persistence.Column;
 import jakarta.persistence.CollectionTable;
 import jakarta.persistence.ElementCollection;
 import jakarta.persistence.Entity;
@@ -44,6 +45,7 @@ public class PlanVersion {
     private String patternName;
     private UUID targetClubId;
     private Double targetGripMarkCm;
+    @Column(name = "target_cycle_time_s") // the naming strategy would drop the underscore before a final capital
     private Double targetCycleTimeS;
     private boolean continueProvisionally;
     @Enumerated(EnumType.STRING)
