@@ -98,11 +98,15 @@ final class DemandChartImage {
         g.drawString(labels.bandLimit(), LEFT + plotW - fm.stringWidth(labels.bandLimit()) - 8, limitY - 10);
 
         int every = Math.max(1, (int) Math.ceil(n / 20.0));
+        int lastLabelled = Integer.MIN_VALUE;
         g.setColor(INK);
         for (int i = 0; i < steps.size(); i++) {
-            if (i % every != 0 && i != steps.size() - 1) {
+            // Every k-th step, and the last one when it does not crowd the label before it.
+            boolean last = i == steps.size() - 1 && i - lastLabelled >= every;
+            if (i % every != 0 && !last) {
                 continue;
             }
+            lastLabelled = i;
             PlanStepView s = steps.get(i);
             int px = xPixel(i, n, plotW);
             String number = Integer.toString(s.number());
