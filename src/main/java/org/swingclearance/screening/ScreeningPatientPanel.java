@@ -69,7 +69,7 @@ class ScreeningPatientPanel implements PatientPanel {
                 ScreeningEvaluator.SideValue.SHOULDER_ER_TORQUE, ScreeningEvaluator.SideValue.SHOULDER_IR_TORQUE)) {
             for (Side side : Side.values()) {
                 String key = v.key(side);
-                add(torque, "ValueKey." + key, null, points, p -> p.derived().get(key));
+                add(torque, "SideValue." + key, null, points, p -> p.derived().get(key));
             }
         }
         List<Series> questionnaires = new ArrayList<>();

@@ -14,8 +14,12 @@ import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.dao.DataAccessException;
 import org.springframework.jdbc.core.JdbcTemplate;
+import org.swingclearance.engine.rules.Rule;
 import org.swingclearance.identity.CurrentStaff;
 import org.swingclearance.patient.RedFlag;
+import org.swingclearance.rules.CurrentRuleSet;
+import org.swingclearance.rules.PracticeRules;
+import org.swingclearance.rules.RuleSetSettings;
 import org.swingclearance.support.IntegrationTest;
 import org.swingclearance.support.PostgresTestBase;
 import org.swingclearance.support.TestData;
@@ -35,6 +39,8 @@ class ScreeningLifecycleTests extends PostgresTestBase {
     TestData data;
     @Autowired
     JdbcTemplate jdbc;
+    @Autowired
+    PracticeRules rules;
 
     TestClinic clinic;
     CurrentStaff clinician;
@@ -260,6 +266,34 @@ class ScreeningLifecycleTests extends PostgresTestBase {
         assertThat(change.mcidPoints()).isEqualTo(8.0);
         assertThat(change.importantImprovement()).isTrue();
         assertThat(s.previous().screeningId()).isEqualTo(first);
+    }
+
+    @Test
+    void aRulesEditNeverChangesASignedScreeningAndNewScreeningsUseTheNewVersion() {
+        UUID first = savedFullScreening();
+        screenings.sign(clinician, first, lock(first), Decision.confirmAll());
+        String signedRow = rowText(first, 1);
+
+        CurrentRuleSet v1 = rules.current(clinic.id());
+        List<Rule> edited = v1.rules().stream().map(r -> !r.code().equals("shoulder.gird-ge-20") ? r
+                : new Rule(r.code(), r.key(), r.comparison(), 30, r.unit(), r.region(), r.caps(), r.source(),
+                        r.required(), r.alsoNeedsWhenFired())).toList();
+        RuleSetSettings s = v1.settings();
+        rules.edit(clinic.manager(), 1, new RuleSetSettings(s.defaultBand(), s.bandFractions(), s.gripFraction(),
+                s.controlledStop(), s.rangeMarginDeg(), s.hipDrivenMinimumBand(), s.stepLimit(), s.painDuringLimit(),
+                s.acwrCaution(), s.planDefaults(), s.scoringPolicy(), edited), "GIRD threshold 30°");
+
+        assertThat(rowText(first, 1)).isEqualTo(signedRow);
+        ScreeningSnapshot old = screenings.page(clinician, first).shown().snapshot();
+        assertThat(old.rulesVersion()).isEqualTo(1);
+        assertThat(old.findings()).extracting(ScreeningSnapshot.Finding::ruleCode).contains("shoulder.gird-ge-20");
+        assertThat(screenings.latestSigned(clinician, episode).orElseThrow().rulesVersion()).isEqualTo(1);
+
+        UUID second = screenings.start(clinician, episode);
+        screenings.saveDraft(clinician, second, lock(second), FullScreening.measurements());
+        ScreeningSnapshot now = screenings.page(clinician, second).shown().snapshot();
+        assertThat(now.rulesVersion()).isEqualTo(2);
+        assertThat(now.findings()).extracting(ScreeningSnapshot.Finding::ruleCode).doesNotContain("shoulder.gird-ge-20");
     }
 
     @Test

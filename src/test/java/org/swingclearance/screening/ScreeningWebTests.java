@@ -137,7 +137,7 @@ class ScreeningWebTests extends PostgresTestBase {
                 .andExpect(jsonPath("$.bands[0].band").value("BAND_1"))
                 .andExpect(jsonPath("$.findings[?(@.rule == 'shoulder.gird-ge-20')].line")
                         .value(Matchers.hasItem("25 ° (≥ 20 °): caps the shoulder band at Band 2.")))
-                .andExpect(jsonPath("$.findings[?(@.rule == 'shoulder.gird-ge-20')].evidence").value(Matchers.hasItem("verified")))
+                .andExpect(jsonPath("$.findings[?(@.rule == 'shoulder.gird-ge-20')].evidence").value(Matchers.hasItem("Verified")))
                 .andExpect(jsonPath("$.derived[?(@.key == 'QUICKDASH_SCORE')].value").value(Matchers.hasItem("40.91 points")))
                 .andExpect(jsonPath("$.fieldErrors").isEmpty());
         mvc.perform(form("/screenings/{id}/preview", null, "SHOULDER_FLEXION_ACTIVE_LEFT", "250"))
@@ -172,6 +172,17 @@ class ScreeningWebTests extends PostgresTestBase {
                 .andExpect(view().name("screening/view"))
                 .andExpect(content().string(Matchers.containsString("Strength tested twice, stable")))
                 .andExpect(content().string(Matchers.containsString("verifies")));
+
+        // The same form sent again (a second click, another tab) changes nothing and says why.
+        String signed = jdbc.queryForObject("select v::text from screening_version v where screening_id = ?",
+                String.class, screening);
+        mvc.perform(post("/screenings/{id}", screening).with(csrf()).with(data.as(clinician))
+                        .param("lockVersion", "0").param("action", "save").param("values[PAIN_AT_REST]", "9"))
+                .andExpect(status().is3xxRedirection())
+                .andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.flash()
+                        .attribute("flash", "screening.error.signed"));
+        assertThat(jdbc.queryForObject("select v::text from screening_version v where screening_id = ?", String.class,
+                screening)).isEqualTo(signed);
     }
 
     @Test
