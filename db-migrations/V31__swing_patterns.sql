@@ -21,8 +21,8 @@ CREATE TABLE swing_pattern (
     CHECK ((clinic_id IS NULL) = (name_key IS NOT NULL)),
     CHECK ((clinic_id IS NULL) = (name IS NULL)),
     CHECK (clinic_id IS NOT NULL OR retired_at IS NULL),
-    -- A hip-driven pattern always names the lumbopelvic band it needs.
-    CHECK (NOT hip_driven OR minimum_lumbopelvic_band IS NOT NULL)
+    -- A hip-driven pattern names the lumbopelvic band it needs (constraint C5); other patterns need none.
+    CHECK (hip_driven = (minimum_lumbopelvic_band IS NOT NULL))
 );
 CREATE INDEX swing_pattern_clinic_idx ON swing_pattern (clinic_id, retired_at);
 CREATE UNIQUE INDEX swing_pattern_active_name_uq ON swing_pattern (clinic_id, lower(name))

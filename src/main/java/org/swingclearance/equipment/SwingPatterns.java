@@ -64,7 +64,7 @@ public class SwingPatterns {
         if (details.minimumLumbopelvicBand() != null && !BANDS.contains(details.minimumLumbopelvicBand())) {
             throw new InvalidStateException("pattern.error.band");
         }
-        if (details.hipDriven() && details.minimumLumbopelvicBand() == null) {
+        if (details.hipDriven() != (details.minimumLumbopelvicBand() != null)) {
             throw new InvalidStateException("pattern.error.hipDrivenNeedsBand");
         }
         if (patterns.existsByClinicIdAndNameIgnoreCaseAndRetiredAtIsNull(staff.clinicId(), details.name().trim())) {

@@ -47,7 +47,9 @@ public class SwingPatternForm {
     }
 
     SwingPatternDetails toDetails() {
-        String band = minimumLumbopelvicBand == null || minimumLumbopelvicBand.isBlank() ? null : minimumLumbopelvicBand;
+        // Only a hip-driven pattern has a lumbopelvic requirement (constraint C5); a band chosen otherwise is dropped.
+        String band = !hipDriven || minimumLumbopelvicBand == null || minimumLumbopelvicBand.isBlank() ? null
+                : minimumLumbopelvicBand;
         return new SwingPatternDetails(name, centreDeg, halfArcDeg, hands, reach, kind, hipDriven, band);
     }
 
