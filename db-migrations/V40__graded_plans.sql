@@ -15,7 +15,7 @@ CREATE TABLE plan (
 CREATE INDEX plan_patient_idx ON plan (clinic_id, patient_id);
 
 -- One version of a plan: the snapshot of everything it was computed from (source screening, practice-rules
--- version, engine version, inputs) and the clinician's settings. Screening and club ids are plain references:
+-- version, engine version, inputs, the envelope snapshot the clinician reviewed) and the clinician's settings. Screening and club ids are plain references:
 -- the plan keeps its own copy of every value it shows, so it never changes when those records change later.
 CREATE TABLE plan_version (
     id                       uuid PRIMARY KEY,
@@ -26,6 +26,7 @@ CREATE TABLE plan_version (
     source_screening_id      uuid         NOT NULL,
     source_screening_version integer      NOT NULL CHECK (source_screening_version >= 1),
     rules_version            integer      NOT NULL CHECK (rules_version >= 1),
+    envelope_snapshot_id     uuid,
     engine_version           varchar(120) NOT NULL,
     band                     varchar(10)  NOT NULL CHECK (band IN ('BAND_1', 'BAND_2', 'BAND_3', 'OPEN')),
     pattern_id               uuid         NOT NULL,

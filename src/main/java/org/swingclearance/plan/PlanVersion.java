@@ -39,6 +39,7 @@ public class PlanVersion {
     private UUID sourceScreeningId;
     private int sourceScreeningVersion;
     private int rulesVersion;
+    private UUID envelopeSnapshotId;
     private String engineVersion;
     private String band;
     private UUID patternId;
@@ -126,10 +127,11 @@ public class PlanVersion {
     }
 
     /** The computed steps replace the previous ones, with the outcome message and the engine's inputs. */
-    void recordComputation(String engineVersion, String inputs, List<PlannedStep> computed, String outcomeKey,
-                           String outcomeArgs) {
+    void recordComputation(String engineVersion, String inputs, UUID envelopeSnapshotId, List<PlannedStep> computed,
+                           String outcomeKey, String outcomeArgs) {
         requireDraft();
         this.engineVersion = engineVersion;
+        this.envelopeSnapshotId = envelopeSnapshotId;
         this.inputs = inputs;
         this.steps.clear();
         this.steps.addAll(computed);
@@ -198,6 +200,7 @@ public class PlanVersion {
     public int getSourceScreeningVersion() { return sourceScreeningVersion; }
     public int getRulesVersion() { return rulesVersion; }
     public String getEngineVersion() { return engineVersion; }
+    public UUID getEnvelopeSnapshotId() { return envelopeSnapshotId; }
     public String getBand() { return band; }
     public UUID getPatternId() { return patternId; }
     public String getPatternName() { return patternName; }

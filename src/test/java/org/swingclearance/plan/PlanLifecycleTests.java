@@ -151,6 +151,26 @@ class PlanLifecycleTests extends PostgresTestBase {
     }
 
     @Test
+    void aTargetOutsideTheEnvelopeIsExplainedWithWhatTheEnvelopePermits() {
+        PlanScenario s = PlanScenario.create(data, clubs, screenings);
+        PlanSettings defaults = s.settings(drafting);
+        // The heaviest club held at the knob at 50 swings a minute: far beyond 40 % of the patient's 90 N·m.
+        PlanSettings beyond = new PlanSettings(defaults.patternId(), new PlanTarget(s.clubs.get(2), 0.0, 1.2),
+                false, defaults.stepUnit(), 3, 3, defaults.startsOn(), defaults.doses());
+        UUID planId = plans.generate(s.clinician(), s.episodeId, beyond);
+        PlanVersionView draft = plans.page(s.clinician(), s.episodeId).draft();
+        assertThat(draft.outcomeKey()).isIn("engine.plan.shortfall.OUTSIDE_ENVELOPE",
+                "engine.plan.shortfall.NEEDS_RESCREEN");
+        assertThat(draft.outcomeArgs().get(0)).startsWith("Cannot reach the target")
+                .contains("The envelope for Club 4.6 kg in this pattern");
+        StepDetail last = draft.steps().get(draft.steps().size() - 1);
+        assertThat(last.step().clubId().equals(s.clubs.get(2)) && last.step().gripMarkCm() == 0.0
+                && last.step().cycleTimeS() == 1.2).as("never clipped to the target").isFalse();
+        assertThat(jdbc.queryForObject("select envelope_snapshot_id is not null from plan_version where plan_id = ?",
+                Boolean.class, planId)).isTrue();
+    }
+
+    @Test
     void anEpisodeOnHoldGetsNoPlanAndThePageSaysWhy() {
         PlanScenario s = PlanScenario.create(data, clubs, screenings);
         patients.recordRedFlags(s.clinician(), s.episodeId, RedFlagContext.RECHECK,
