@@ -74,6 +74,8 @@ class PlanSharing {
                     // The consent it rested on was withdrawn: close it before the share on the new consent.
                     existing.end(clinician.staffId(), now);
                     shares.saveAndFlush(existing);
+                    audit.record(clinician, "PLAN_UNSHARE", "Plan", planId, plan.getPatientId(),
+                            "share=" + existing.getId() + ",trainer=" + trainerId + ",reason=consent withdrawn");
                 });
         PlanShare share = new PlanShare(UUID.randomUUID(), clinician.clinicId(), planId, plan.getPatientId(),
                 trainerId, consent.id(), now, clinician.staffId());
@@ -192,8 +194,8 @@ class PlanSharing {
         audit.record(trainer, "INVITATION_ACCEPT", "TrainerInvitation", invitation.getId(), invitation.getPatientId(),
                 "account=" + account.getId());
         audit.record(trainer, "PLAN_SHARE", "Plan", invitation.getPlanId(), invitation.getPatientId(),
-                "share=" + share.getId() + ",via invitation=" + invitation.getId() + ",invitedBy="
-                        + invitation.getCreatedBy());
+                "share=" + share.getId() + ",trainer=" + account.getId() + ",invitation=" + invitation.getId()
+                        + ",invitedBy=" + invitation.getCreatedBy());
         return account.getId();
     }
 

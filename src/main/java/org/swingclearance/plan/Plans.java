@@ -69,7 +69,7 @@ public class Plans {
     public PlanPage page(CurrentStaff clinician, UUID episodeId) {
         EpisodeSummary episode = episode(clinician, episodeId, "PLAN_READ");
         Optional<GradedPlan> plan = plans.findByClinicIdAndEpisodeId(clinician.clinicId(), episodeId);
-        plan.ifPresent(p -> audit.record(clinician, "PLAN_READ", "Plan", p.getId(), p.getPatientId(), "page"));
+        plan.ifPresent(p -> audit.record(clinician, "PLAN_READ", "Plan", p.getId(), p.getPatientId(), "view=page"));
         return pages.page(clinician, episode, plan.orElse(null));
     }
 
@@ -207,7 +207,7 @@ public class Plans {
             currentIssuedVersion(plan.get()).ifPresent(v -> {
                 IssuedPlanView view = views.issued(trainer, plan.get(), v);
                 audit.record(trainer, "PLAN_READ", "Plan", view.planId(), view.patientId(),
-                        "version=" + v.getNumber() + ",list");
+                        "version=" + v.getNumber() + ",view=list");
                 PlanStepView thisWeek = view.stepFor(today).orElse(null);
                 PlanStepView next = thisWeek == null ? null : view.after(thisWeek).orElse(null);
                 result.add(new SharedPlanView(view.planId(), view.version(), view.episodeId(), view.patientId(),
@@ -260,7 +260,11 @@ public class Plans {
         }
         draft.issue(clinician.staffId(), clock.instant(), PlanFingerprint.of(draft));
         versions.saveAndFlush(draft);
-        audit.record(clinician, "PLAN_ISSUE", "Plan", planId, plan.getPatientId(), "version=" + draft.getNumber());
+        // Detail keys as the manager's reports read them: the episode and the date of the re-screen gate, if any.
+        String rescreenDue = draft.getSteps().stream().filter(PlannedStep::isGateBefore).findFirst()
+                .map(s -> ",rescreenDue=" + s.getStartsOn()).orElse("");
+        audit.record(clinician, "PLAN_ISSUE", "Plan", planId, plan.getPatientId(),
+                "episode=" + plan.getEpisodeId() + ",version=" + draft.getNumber() + rescreenDue);
     }
 
     /** Throws the draft away; a plan left without any version goes with it. */
@@ -291,7 +295,7 @@ public class Plans {
             GradedPlan p = plan.get();
             Optional<PlanVersion> issued = currentIssuedVersion(p);
             long active = sharing.sharesOf(clinician, p).stream().filter(ShareView::active).count();
-            audit.record(clinician, "PLAN_READ", "Plan", p.getId(), p.getPatientId(), "summary");
+            audit.record(clinician, "PLAN_READ", "Plan", p.getId(), p.getPatientId(), "view=summary");
             result.add(new EpisodePlanSummary(episode, p.getId(), issued.map(PlanVersion::getNumber).orElse(null),
                     issued.map(PlanVersion::getIssuedAt).orElse(null),
                     draft(p).map(PlanVersion::getNumber).orElse(null), active));

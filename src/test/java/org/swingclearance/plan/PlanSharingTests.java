@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.time.LocalDate;
+import java.util.List;
 import java.util.UUID;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
@@ -146,6 +147,35 @@ class PlanSharingTests extends PostgresTestBase {
         assertThat(shared.thisWeek().number()).isEqualTo(2);
         assertThat(shared.next().number()).isEqualTo(3);
         assertThat(shared.patientLabel()).isEqualTo("Test Patient (" + patientCode(s) + ")");
+    }
+
+    @Test
+    void everyReadAndChangeOfAPlanIsAuditedWithTheDetailsTheReportsRead() {
+        PlanScenario s = PlanScenario.create(data, clubs, screenings);
+        UUID planId = plans.generate(s.clinician(), s.episodeId, s.settings(drafting));
+        PlanVersionView draft = plans.page(s.clinician(), s.episodeId).draft();
+        plans.updateSettings(s.clinician(), planId, draft.lockVersion(), draft.settings());
+        plans.issue(s.clinician(), planId, plans.page(s.clinician(), s.episodeId).draft().lockVersion());
+        s.consentForTrainer(patients);
+        UUID share = plans.share(s.clinician(), planId, s.trainer().staffId());
+        plans.currentIssued(s.trainer(), s.episodeId);
+        plans.handout(s.trainer(), planId, java.util.Locale.ENGLISH);
+        plans.unshare(s.clinician(), planId, share);
+        String email = "invited-" + UUID.randomUUID().toString().substring(0, 8) + "@test.local";
+        patients.recordConsent(s.clinician(), s.patientId, "Ivy Invited", email, LocalDate.now());
+        plans.invite(s.clinician(), planId, email, "Ivy Invited");
+
+        List<String> actions = jdbc.queryForList("select distinct action from audit_event where object_id = ?"
+                + " and outcome = 'SUCCESS' and patient_id = ?", String.class, planId.toString(), s.patientId);
+        assertThat(actions).contains("PLAN_CREATE", "PLAN_UPDATE", "PLAN_ISSUE", "PLAN_READ", "PLAN_SHARE",
+                "PLAN_EXPORT", "PLAN_UNSHARE");
+        assertThat(jdbc.queryForObject("select count(*) from audit_event where action = 'INVITATION_CREATE'"
+                + " and patient_id = ?", Integer.class, s.patientId)).isEqualTo(1);
+        assertThat(jdbc.queryForObject("select detail from audit_event where action = 'PLAN_ISSUE' and object_id = ?",
+                String.class, planId.toString())).startsWith("episode=" + s.episodeId + ",version=1");
+        assertThat(jdbc.queryForList("select detail from audit_event where action in ('PLAN_SHARE', 'PLAN_UNSHARE')"
+                + " and object_id = ?", String.class, planId.toString()))
+                .hasSize(2).allSatisfy(d -> assertThat(d).contains("trainer=" + s.trainer().staffId()));
     }
 
     int deniedReads(CurrentStaff who, UUID planId) {
