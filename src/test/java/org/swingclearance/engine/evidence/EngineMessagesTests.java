@@ -46,7 +46,7 @@ class EngineMessagesTests {
         List<Class<? extends Enum<?>>> top = List.of(EvidenceTag.class, Confidence.class, Side.class, Sex.class,
                 Region.class, LoadBand.class, Comparison.class, RotationBasis.class, OdiBand.class, Instrument.class,
                 Measure.class, ValueKey.class, DayStatus.class, RatioStatus.class, WindowStatus.class,
-                SdConvention.class, ConfigurationMatch.class, RedFlag.class);
+                SdConvention.class, ConfigurationMatch.class);
         List<Class<? extends Enum<?>>> nested = List.of(RegionBand.Basis.class, MissingValue.Need.class,
                 NotScorable.Reason.class, Spadi.TotalMethod.class, Grip.Protocol.class, PainDecision.Decision.class,
                 PainReason.Kind.class, Alert.Kind.class);
