@@ -15,7 +15,7 @@ import org.swingclearance.engine.mechanics.Verdict;
  * Inverts the constraints of {@link Assessor} around one configuration (engine.md §6): the furthest grip from the
  * head, the shortest cycle time and the heaviest mass of the club's shape that are permitted. Each limit is found
  * by a 32-step scan from the demanding end of its range and bisection of the first edge to
- * 1e-7 relative, so every returned limit is permitted and any value 1 % beyond it is not. When no value in the range
+ * 1e-6 relative, so every returned limit is permitted and any value 1 % beyond it is not. When no value in the range
  * is permitted the limit is {@link LimitStatus#NOT_PERMISSIBLE}, never clipped. Stateless and thread-safe.
  */
 public final class EnvelopeCalculator {
@@ -28,7 +28,7 @@ public final class EnvelopeCalculator {
     public static final double MAX_CLUB_MASS_KG = 50.0;
 
     static final String SEARCH = "Each limit is the permitted value nearest the demanding end of its range, found"
-            + " by a 32-step scan and bisection to 1e-7 relative; a limit with nothing permitted in its range is"
+            + " by a 32-step scan and bisection to 1e-6 relative; a limit with nothing permitted in its range is"
             + " reported as not permissible, never clipped.";
     static final String SHAPE = "The heaviest mass keeps the club's shape: its balance point and radius of"
             + " gyration stay fixed while the mass changes.";
@@ -57,7 +57,9 @@ public final class EnvelopeCalculator {
         double lenient = Math.min(club.handleLengthM(),
                 configuration.shoulderToGripM() + club.balancePointM() - 1e-6);
         Verdict atLenient = Assessor.verdict(configuration.withGripMark(lenient), capacity, rules);
-        if (!Assessor.patternAllowed(configuration.pattern(), capacity, rules)) {
+        // Hold torque and grip pull only grow with the moment arm: failing at the shortest arm, they fail at all.
+        if (!Assessor.patternAllowed(configuration.pattern(), capacity, rules)
+                || Assessor.monotoneRatio(configuration.withGripMark(lenient), capacity, rules) > 1.0) {
             return new GripLimit(LimitStatus.NOT_PERMISSIBLE, null, null, atLenient);
         }
         double limit = LimitSearch.nearestPermitted(
@@ -73,7 +75,10 @@ public final class EnvelopeCalculator {
     /** Smallest permitted cycle time in [0.6, 8] s at the configuration's grip mark. */
     public static CycleTimeLimit shortestCycleTime(Configuration configuration, Capacity capacity, LoadRules rules) {
         Verdict atSlowest = Assessor.verdict(configuration.withCycleTime(MAX_CYCLE_TIME_S), capacity, rules);
-        if (!Assessor.patternAllowed(configuration.pattern(), capacity, rules)) {
+        // Hold torque does not depend on the tempo and grip pull falls as the swing slows: failing at the slowest
+        // cycle time, they fail at every tempo.
+        if (!Assessor.patternAllowed(configuration.pattern(), capacity, rules)
+                || Assessor.monotoneRatio(configuration.withCycleTime(MAX_CYCLE_TIME_S), capacity, rules) > 1.0) {
             return new CycleTimeLimit(LimitStatus.NOT_PERMISSIBLE, null, atSlowest);
         }
         DoubleUnaryOperator ratio = time -> Assessor.demandRatio(configuration.withCycleTime(time), capacity, rules);
@@ -88,7 +93,9 @@ public final class EnvelopeCalculator {
     /** Largest permitted mass of the club's shape in (0, 50] kg at the configuration's grip mark and cycle time. */
     public static MassLimit heaviestMass(Configuration configuration, Capacity capacity, LoadRules rules) {
         Verdict atLightest = Assessor.verdict(configuration.withClubMass(MIN_CLUB_MASS_KG), capacity, rules);
-        if (!Assessor.patternAllowed(configuration.pattern(), capacity, rules)) {
+        // Hold torque and grip pull only grow with the mass: failing at the lightest club, they fail at all.
+        if (!Assessor.patternAllowed(configuration.pattern(), capacity, rules)
+                || Assessor.monotoneRatio(configuration.withClubMass(MIN_CLUB_MASS_KG), capacity, rules) > 1.0) {
             return new MassLimit(LimitStatus.NOT_PERMISSIBLE, null, atLightest);
         }
         DoubleUnaryOperator ratio = mass -> Assessor.demandRatio(configuration.withClubMass(mass), capacity, rules);

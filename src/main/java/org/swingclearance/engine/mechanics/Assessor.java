@@ -37,39 +37,33 @@ public final class Assessor {
 
     /** The verdict for a configuration: permitted, demand ratio D and binding constraint. */
     public static Verdict verdict(Configuration c, Capacity capacity, LoadRules rules) {
-        Constraint gate = failedGate(c.pattern(), capacity, rules);
-        double torque = ratio(DemandCalculator.peakShoulderTorqueNm(c), shoulderAllowance(capacity, rules));
-        double worst = torque;
-        Constraint binding = Constraint.SHOULDER_TORQUE;
-        if (rules.controlledStop()) {
-            double hold = ratio(DemandCalculator.holdTorqueNm(c), shoulderAllowance(capacity, rules));
-            if (hold > worst) {
-                worst = hold;
-                binding = Constraint.HOLD_TORQUE;
-            }
-        }
-        if (capacity.gripStrengthKg() != null) {
-            double grip = ratio(DemandCalculator.peakGripPullN(c), gripAllowance(capacity, rules, c.gravity()));
-            if (grip > worst) {
-                worst = grip;
-                binding = Constraint.GRIP_PULL;
-            }
-        }
-        if (gate != null) {
-            return new Verdict(false, worst, gate);
-        }
-        return new Verdict(worst <= 1.0, worst, binding);
+        double allowance = shoulderAllowance(capacity, rules);
+        return judge(failedGate(c.pattern(), capacity, rules),
+                ratio(DemandCalculator.peakShoulderTorqueNm(c), allowance),
+                rules.controlledStop() ? ratio(DemandCalculator.holdTorqueNm(c), allowance) : Double.NaN,
+                capacity.gripStrengthKg() != null
+                        ? ratio(DemandCalculator.peakGripPullN(c), gripAllowance(capacity, rules, c.gravity()))
+                        : Double.NaN);
     }
 
     /**
-     * D alone: the largest ratio of the load constraints C1–C3 that apply (the gates C4, C5 are ignored here).
-     * The margin function of the envelope inversions; allocation-free apart from the sampled profiles.
+     * D alone: the largest ratio of the load constraints C1–C3 that apply; the gates C4 and C5 do not change it.
+     * The margin function of the envelope inversions.
      */
     public static double demandRatio(Configuration c, Capacity capacity, LoadRules rules) {
-        double allowance = shoulderAllowance(capacity, rules);
-        double worst = ratio(DemandCalculator.peakShoulderTorqueNm(c), allowance);
+        return verdict(c, capacity, rules).demandRatio();
+    }
+
+    /**
+     * The largest ratio of the load constraints that can only grow with moment arm and club mass and only shrink
+     * with a slower cycle time: C2 (hold torque, when the controlled-stop rule is on) and C3 (grip pull, when
+     * grip strength was measured); 0 when neither applies. A floor under {@link #demandRatio}: when it exceeds 1
+     * at the lenient end of an envelope range, nothing in the range is permitted.
+     */
+    public static double monotoneRatio(Configuration c, Capacity capacity, LoadRules rules) {
+        double worst = 0.0;
         if (rules.controlledStop()) {
-            worst = Math.max(worst, ratio(DemandCalculator.holdTorqueNm(c), allowance));
+            worst = ratio(DemandCalculator.holdTorqueNm(c), shoulderAllowance(capacity, rules));
         }
         if (capacity.gripStrengthKg() != null) {
             worst = Math.max(worst, ratio(DemandCalculator.peakGripPullN(c), gripAllowance(capacity, rules,
@@ -109,17 +103,7 @@ public final class Assessor {
         if (gate == Constraint.HIP_DRIVE) {
             notes.add(HIP_DRIVE_EXCLUDED);
         }
-        double worst = torque;
-        Constraint binding = Constraint.SHOULDER_TORQUE;
-        if (hold != null && hold > worst) {
-            worst = hold;
-            binding = Constraint.HOLD_TORQUE;
-        }
-        if (grip != null && grip > worst) {
-            worst = grip;
-            binding = Constraint.GRIP_PULL;
-        }
-        Verdict verdict = gate != null ? new Verdict(false, worst, gate) : new Verdict(worst <= 1.0, worst, binding);
+        Verdict verdict = judge(gate, torque, hold != null ? hold : Double.NaN, grip != null ? grip : Double.NaN);
         return new Assessment(demand, capacity, rules, verdict, torque, hold, grip, maxHalfArc, notes,
                 EngineVersion.ENGINE_VERSION);
     }
@@ -136,12 +120,30 @@ public final class Assessor {
         return Math.max(0.0, Math.min(Math.PI, allowed));
     }
 
+    /**
+     * D is the largest load ratio that applies (NaN marks one that does not); a failed gate decides the binding
+     * constraint and refuses the configuration whatever D is.
+     */
+    private static Verdict judge(Constraint gate, double torque, double hold, double grip) {
+        double worst = torque;
+        Constraint binding = Constraint.SHOULDER_TORQUE;
+        if (hold > worst) {
+            worst = hold;
+            binding = Constraint.HOLD_TORQUE;
+        }
+        if (grip > worst) {
+            worst = grip;
+            binding = Constraint.GRIP_PULL;
+        }
+        return gate != null ? new Verdict(false, worst, gate) : new Verdict(worst <= 1.0, worst, binding);
+    }
+
     private static Constraint failedGate(SwingPattern pattern, Capacity capacity, LoadRules rules) {
         if (!withinRange(pattern, capacity, rules)) {
             return Constraint.RANGE_OF_MOTION;
         }
         if (pattern.hipDriven() && (capacity.lumbopelvicBand() == null
-                || !capacity.lumbopelvicBand().reaches(rules.hipDriveMinimumBand()))) {
+                || capacity.lumbopelvicBand().isMoreRestrictiveThan(rules.hipDriveMinimumBand()))) {
             return Constraint.HIP_DRIVE;
         }
         return null;

@@ -1,5 +1,7 @@
 package org.swingclearance.engine.mechanics;
 
+import org.swingclearance.engine.rules.LoadBand;
+
 /**
  * What the patient measured (engine.md §5). Without a measured shoulder flexion torque there is no capacity: the
  * caller reports demand only and asks for that measurement ({@link #MEASURE_SHOULDER_TORQUE}).

@@ -1,5 +1,7 @@
 package org.swingclearance.engine.mechanics;
 
+import org.swingclearance.engine.rules.LoadBand;
+
 /**
  * The practice rules a configuration is judged by (engine.md §5). The clinic's rules set the values; the defaults
  * here are the engine's.

@@ -44,6 +44,12 @@ public record PendulumTiming(double pivotFromBalancePointM, int swings, double s
         return clubMassKg * pivotFromBalancePointM * equivalentLengthM(gravity);
     }
 
+    /** Whether this timing gives a positive inertia about the balance point for a club of this mass. */
+    public boolean givesPositiveInertia(double clubMassKg, double gravity) {
+        double d = pivotFromBalancePointM;
+        return inertiaAboutPivotKgM2(clubMassKg, gravity) - clubMassKg * d * d > 0.0;
+    }
+
     /**
      * Inertia about the balance point, I_pivot − m·d², kg·m².
      *

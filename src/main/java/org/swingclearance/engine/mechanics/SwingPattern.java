@@ -5,7 +5,8 @@ package org.swingclearance.engine.mechanics;
  * forward/up positive; the pattern spans θ_c − A … θ_c + A.
  *
  * @param centreRad  θ_c, rad, in [−π, π]
- * @param halfArcRad A, rad, in (0, π]
+ * @param halfArcRad A, rad, in (0, π], with |θ_c| + A ≤ π (the arc stays between straight down behind and
+ *                   straight up, never sweeping past them)
  * @param hands      1 or 2; with 2 hands each arm carries half the club (an approximation the output states)
  * @param reach      reach factor ρ in [{@value #MIN_REACH}, 1]; a bent-elbow arc shortens the shoulder-to-grip
  *                   distance to ρ·R_g
@@ -16,10 +17,16 @@ public record SwingPattern(double centreRad, double halfArcRad, int hands, doubl
                            boolean hipDriven) {
 
     public static final double MIN_REACH = 0.3;
+    /** Rounding slack for arcs given in degrees that end exactly at ±180°. */
+    private static final double ANGLE_SLACK = 1e-9;
 
     public SwingPattern {
         Checks.inRange("pattern centre (rad)", centreRad, -Math.PI, Math.PI);
         Checks.aboveAtMost("half-arc (rad)", halfArcRad, 0.0, Math.PI);
+        if (Math.abs(centreRad) + halfArcRad > Math.PI + ANGLE_SLACK) {
+            throw new IllegalArgumentException("the arc must stay within -180° and 180°: centre ± half-arc was "
+                    + Math.toDegrees(centreRad - halfArcRad) + "° to " + Math.toDegrees(centreRad + halfArcRad) + "°");
+        }
         if (hands != 1 && hands != 2) {
             throw new IllegalArgumentException("hands must be 1 or 2, was " + hands);
         }

@@ -12,10 +12,10 @@ import org.swingclearance.engine.mechanics.Configuration;
 import org.swingclearance.engine.mechanics.Constraint;
 import org.swingclearance.engine.mechanics.EngineVersion;
 import org.swingclearance.engine.mechanics.Gravity;
-import org.swingclearance.engine.mechanics.LoadBand;
 import org.swingclearance.engine.mechanics.LoadRules;
 import org.swingclearance.engine.mechanics.SwingKind;
 import org.swingclearance.engine.mechanics.SwingPattern;
+import org.swingclearance.engine.rules.LoadBand;
 
 /** The envelope as a whole: gates exclude every limit, Hold permits nothing, results say how they were found. */
 class EnvelopeTests {

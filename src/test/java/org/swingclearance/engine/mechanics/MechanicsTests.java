@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
+import org.swingclearance.engine.rules.LoadBand;
 
 /** Input checks, inertia-source selection, the two-hand split, the constraints C1–C5 and what results carry. */
 class MechanicsTests {

@@ -34,7 +34,7 @@ class WorkCrossCheckTests {
             Club club = new Club(mass, 0.6, 0.45, 0.3, ClubInertia.modelled(mass, 0.6, 0.45, 0.5));
             return new Configuration(Body.of(1.5 + 0.5 * random.nextDouble(), 50 + 60 * random.nextDouble()), club,
                     0.3 * random.nextDouble(), pattern, 0.7 + 4 * random.nextDouble(), Gravity.STANDARD);
-        }).limit(24);
+        }).limit(40);
     }
 
     @ParameterizedTest
