@@ -12,6 +12,8 @@ document.addEventListener('DOMContentLoaded', () => {
   const format = (value, decimals, unit) => (value === null || value === undefined)
     ? '–' : value.toFixed(decimals) + (unit ? ' ' + unit : '');
 
+  // Axis labels with at most two decimals (the axis ends are data values such as 22.000000000000004 cm).
+  const tick = (value) => String(Math.round(value * 100) / 100);
   const chart = (canvasId, xTitle) => new Chart(byId(canvasId), {
     type: 'line',
     data: {
@@ -21,7 +23,7 @@ document.addEventListener('DOMContentLoaded', () => {
         { label: labels.permittedLine, data: [], borderColor: '#9b1c1c', borderDash: [6, 4], pointRadius: 0,
           borderWidth: 1.5 },
         { label: labels.chosen, data: [], type: 'scatter', borderColor: '#1f2a33', backgroundColor: '#f5b700',
-          pointRadius: 7, pointStyle: 'rectRot' },
+          pointRadius: 7, pointStyle: 'rectRot', clip: false },
       ],
     },
     options: {
@@ -29,8 +31,8 @@ document.addEventListener('DOMContentLoaded', () => {
       maintainAspectRatio: false,
       parsing: false,
       scales: {
-        x: { type: 'linear', title: { display: true, text: xTitle } },
-        y: { type: 'linear', min: 0, title: { display: true, text: labels.demandAxis } },
+        x: { type: 'linear', title: { display: true, text: xTitle }, ticks: { callback: tick } },
+        y: { type: 'linear', min: 0, title: { display: true, text: labels.demandAxis }, ticks: { callback: tick } },
       },
       plugins: { legend: { position: 'bottom' } },
     },
@@ -43,7 +45,7 @@ document.addEventListener('DOMContentLoaded', () => {
     const xs = series.map((p) => p.x);
     const finite = series.map((p) => p.d).filter((d) => d !== null);
     // Keep the permitted line in view: the axis grows with the demand up to 6 × the allowance, then clips.
-    const top = Math.min(Math.max(1.5, ...finite, chosenD || 0) * 1.05, 6);
+    const top = Math.ceil(Math.min(Math.max(1.5, ...finite, chosenD || 0) * 1.05, 6) * 2) / 2;
     target.data.datasets[0].data = points;
     target.data.datasets[1].data = xs.length ? [{ x: Math.min(...xs), y: 1 }, { x: Math.max(...xs), y: 1 }] : [];
     target.data.datasets[2].data = chosenD === null ? [] : [{ x: chosenX, y: chosenD }];

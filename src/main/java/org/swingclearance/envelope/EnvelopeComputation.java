@@ -18,7 +18,7 @@ import org.swingclearance.engine.mechanics.Configuration;
 import org.swingclearance.engine.mechanics.Demand;
 import org.swingclearance.engine.mechanics.Gravity;
 import org.swingclearance.engine.mechanics.InertiaSource;
-import org.swingclearance.engine.mechanics.LoadBand;
+import org.swingclearance.engine.rules.LoadBand;
 import org.swingclearance.engine.mechanics.LoadRules;
 import org.swingclearance.engine.mechanics.SwingKind;
 import org.swingclearance.engine.mechanics.SwingPattern;
@@ -235,7 +235,7 @@ final class EnvelopeComputation {
         LoadBand minimum = LoadBand.valueOf(r.hipDrivenMinimumBand());
         if (pattern.minimumLumbopelvicBand() != null) {
             LoadBand own = LoadBand.valueOf(pattern.minimumLumbopelvicBand());
-            minimum = own.reaches(minimum) ? own : minimum;
+            minimum = minimum.isMoreRestrictiveThan(own) ? own : minimum;
         }
         return new LoadRules(c.shoulderBandFraction(), r.gripFraction(), r.controlledStop(),
                 Math.toRadians(r.rangeMarginDeg()), minimum);

@@ -47,6 +47,26 @@ final class ClubMeasurements {
         };
     }
 
+    /**
+     * A stored club's inertia beside its safe bound, for its page: never re-judges the stored measurements (they
+     * were checked when saved), so a club saved under earlier rules always shows.
+     */
+    static InertiaEstimate describe(ClubView club, PendulumReading pendulum) {
+        double bound = ClubInertia.bound(club.massKg(), club.lengthM(), club.balancePointM()).aboutBalancePointKgM2();
+        Double period = pendulum == null ? null : pendulum.periodS();
+        Double equivalentLength = null;
+        if (pendulum != null) {
+            try {
+                equivalentLength = new PendulumTiming(pendulum.pivotFromBalancePointM(), pendulum.swings(),
+                        pendulum.seconds()).equivalentLengthM(Gravity.STANDARD);
+            } catch (IllegalArgumentException outsideTodaysRanges) {
+                equivalentLength = null;
+            }
+        }
+        return new InertiaEstimate(club.inertiaAboutBalancePointKgM2(), club.inertiaSource(), bound, period,
+                equivalentLength);
+    }
+
     private static InertiaEstimate fromPendulum(ClubDetails d, double bound) {
         PendulumReading p = d.pendulum();
         if (p == null) {

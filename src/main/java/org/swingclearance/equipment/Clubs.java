@@ -56,10 +56,8 @@ public class Clubs {
     public ClubPage page(CurrentStaff staff, UUID clubId) {
         Club club = load(staff, clubId, "CLUB_READ");
         ClubView v = club.view();
-        InertiaEstimate inertia = ClubMeasurements.check(new ClubDetails(v.name(), v.massKg(), v.lengthM(),
-                v.balancePointM(), v.handleLengthM(), v.headCentreM(), club.method(), club.pendulum()));
-        return new ClubPage(v, club.method(), club.pendulum(), inertia, club.getVersion(), club.getUpdatedAt(),
-                club.getRetiredAt());
+        return new ClubPage(v, club.method(), club.pendulum(), ClubMeasurements.describe(v, club.pendulum()),
+                club.getVersion(), club.getUpdatedAt(), club.getRetiredAt());
     }
 
     /** Works out the inertia the measurements give, without saving: the pendulum guide's "compute" step. */

@@ -18,7 +18,7 @@ import org.swingclearance.engine.mechanics.ClubInertia;
 import org.swingclearance.engine.mechanics.Configuration;
 import org.swingclearance.engine.mechanics.Constraint;
 import org.swingclearance.engine.mechanics.Gravity;
-import org.swingclearance.engine.mechanics.LoadBand;
+import org.swingclearance.engine.rules.LoadBand;
 import org.swingclearance.engine.mechanics.LoadRules;
 import org.swingclearance.engine.mechanics.PendulumTiming;
 import org.swingclearance.engine.mechanics.SwingKind;

@@ -15,7 +15,7 @@ import org.swingclearance.engine.mechanics.ClubInertia;
 import org.swingclearance.engine.mechanics.Configuration;
 import org.swingclearance.engine.mechanics.EngineVersion;
 import org.swingclearance.engine.mechanics.Gravity;
-import org.swingclearance.engine.mechanics.LoadBand;
+import org.swingclearance.engine.rules.LoadBand;
 import org.swingclearance.engine.mechanics.LoadRules;
 import org.swingclearance.engine.mechanics.SwingKind;
 import org.swingclearance.engine.mechanics.SwingPattern;

@@ -48,7 +48,7 @@ class SwingPatternController {
         try {
             patterns.create(me.staff(), form.toDetails());
         } catch (InvalidStateException e) {
-            errors.rejectValue(e.messageKey().equals("pattern.error.nameTaken") ? "name" : "kind", e.messageKey());
+            errors.rejectValue(fieldOf(e.messageKey()), e.messageKey());
             return show(me.staff(), model);
         }
         redirect.addFlashAttribute("flash", "pattern.created");
@@ -61,6 +61,15 @@ class SwingPatternController {
         patterns.retire(me.staff(), id, version);
         redirect.addFlashAttribute("flash", "pattern.retired");
         return "redirect:/patterns";
+    }
+
+    /** The form field a refusal of the service belongs to. */
+    private static String fieldOf(String messageKey) {
+        return switch (messageKey) {
+            case "pattern.error.nameTaken" -> "name";
+            case "pattern.error.band", "pattern.error.hipDrivenNeedsBand" -> "minimumLumbopelvicBand";
+            default -> "kind";
+        };
     }
 
     private String show(CurrentStaff staff, Model model) {
