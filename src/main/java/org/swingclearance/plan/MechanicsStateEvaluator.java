@@ -46,8 +46,10 @@ final class MechanicsStateEvaluator implements StateEvaluator {
         this.pattern = SwingPattern.ofDegrees(p.centreDeg(), p.halfArcDeg(), p.hands(), p.reach(),
                 SwingKind.valueOf(p.kind()), p.hipDriven());
         LoadBand hipMinimum = LoadBand.valueOf(in.hipDrivenMinimumBand());
-        if (p.minimumLumbopelvicBand() != null && !hipMinimum.reaches(LoadBand.valueOf(p.minimumLumbopelvicBand()))) {
-            hipMinimum = LoadBand.valueOf(p.minimumLumbopelvicBand());
+        if (p.minimumLumbopelvicBand() != null) {
+            // The stricter minimum is the higher band: the less restrictive of the two.
+            LoadBand patternMinimum = LoadBand.valueOf(p.minimumLumbopelvicBand());
+            hipMinimum = hipMinimum.isMoreRestrictiveThan(patternMinimum) ? patternMinimum : hipMinimum;
         }
         this.current = new LoadRules(in.bandFraction(), in.gripFraction(), in.controlledStop(),
                 Math.toRadians(in.rangeMarginDeg()), hipMinimum);
