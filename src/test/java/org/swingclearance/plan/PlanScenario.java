@@ -29,6 +29,10 @@ final class PlanScenario {
     /** Built-in "two-hand front pendulum, low" (V31): centre 0°, half-arc 45°, two hands, rhythmic, not hip-driven. */
     static final UUID TWO_HAND_LOW_PENDULUM = UUID.fromString("00000000-0000-4000-8000-00000000a002");
 
+    /** The screening's band decisions carry these reasons: clinical text a trainer must never see. */
+    static final String SHOULDER_OVERRIDE_REASON = "Tolerates two-hand carries at this level";
+    static final String LUMBOPELVIC_OVERRIDE_REASON = "No lumbar symptoms during the last month of training";
+
     final TestClinic clinic;
     final UUID patientId;
     final UUID episodeId;
@@ -84,8 +88,7 @@ final class PlanScenario {
         screenings.saveDraft(clinician, id, screenings.page(clinician, id).shown().lockVersion(),
                 MeasurementReading.of(typedScreening(), Set.of()).measurements());
         screenings.sign(clinician, id, screenings.page(clinician, id).shown().lockVersion(),
-                new Decision("BAND_2", "Tolerates two-hand carries at this level", "BAND_2",
-                        "No lumbar symptoms during the last month of training"));
+                new Decision("BAND_2", SHOULDER_OVERRIDE_REASON, "BAND_2", LUMBOPELVIC_OVERRIDE_REASON));
     }
 
     static Map<String, String> typedScreening() {
