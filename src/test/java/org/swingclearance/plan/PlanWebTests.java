@@ -151,6 +151,10 @@ class PlanWebTests extends PostgresTestBase {
 
     @Test
     void theTrainerSeesThePlanAndNothingClinicalBeyondIt() throws Exception {
+        // The markers are really in the record: at least one override reason was stored with the screening.
+        assertThat(jdbc.queryForObject("select count(*) from screening_version v join screening s on s.id = v.screening_id"
+                + " where s.episode_id = ? and (v.shoulder_override_reason is not null"
+                + " or v.lumbopelvic_override_reason is not null)", Integer.class, s.episodeId)).isPositive();
         List<String> pages = List.of(
                 body(get("/plans/{id}", planId), s.trainer()),
                 body(get("/plans"), s.trainer()),
