@@ -181,10 +181,6 @@ public class PlanVersion {
                 startsOn, byBand);
     }
 
-    public boolean isDraft() {
-        return status == PlanStatus.DRAFT;
-    }
-
     private void requireDraft() {
         if (status != PlanStatus.DRAFT) {
             throw new IllegalStateException("plan version " + id + " is issued and read-only");

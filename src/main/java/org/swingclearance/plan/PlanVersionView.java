@@ -1,7 +1,6 @@
 package org.swingclearance.plan;
 
 import java.time.Instant;
-import java.time.LocalDate;
 import java.util.List;
 import java.util.UUID;
 
@@ -28,10 +27,6 @@ public record PlanVersionView(UUID id, UUID planId, int number, PlanStatus statu
 
     public Integer gateStep() {
         return steps.stream().filter(StepDetail::gateBefore).map(s -> s.step().number()).findFirst().orElse(null);
-    }
-
-    public LocalDate startsOn() {
-        return settings.startsOn();
     }
 
     public long pinnedCount() {
