@@ -44,6 +44,8 @@ CREATE TABLE session_log_version (
     planned_demand_ratio  double precision NOT NULL,
     duration_min          integer      NOT NULL CHECK (duration_min BETWEEN 1 AND 600),
     rpe                   integer      NOT NULL CHECK (rpe BETWEEN 0 AND 10),
+    -- pain at rest before the session: the baseline the next-morning pain must settle back to
+    pain_before           integer      NOT NULL CHECK (pain_before BETWEEN 0 AND 10),
     pain_during           integer      NOT NULL CHECK (pain_during BETWEEN 0 AND 10),
     notes                 varchar(2000),
     reason                varchar(1000),

@@ -1,6 +1,6 @@
 -- Alerts raised from session logs for the clinician: pain during above the practice rule's limit, pain not settled
--- next morning, a configuration heavier than the current plan step, an acute:chronic load ratio above the rule's
--- caution level. An alert is never deleted and never rewritten; the only change allowed is its one acknowledgement.
+-- next morning, weekly pain rising, a configuration heavier than the current plan step, an acute:chronic load ratio
+-- above the rule's caution level. An alert is never deleted and never rewritten; the only change allowed is its one acknowledgement.
 
 CREATE TABLE training_alert (
     id               uuid PRIMARY KEY,
@@ -11,7 +11,8 @@ CREATE TABLE training_alert (
     -- the log version or next-morning entry that raised it (one alert of a kind per source)
     source_id        uuid         NOT NULL,
     kind             varchar(30)  NOT NULL
-        CHECK (kind IN ('PAIN_DURING', 'PAIN_NOT_SETTLED', 'HEAVIER_THAN_STEP', 'LOAD_RATIO')),
+        CHECK (kind IN ('PAIN_DURING', 'PAIN_NOT_SETTLED', 'PAIN_RISING_WEEKLY', 'HEAVIER_THAN_STEP',
+                        'LOAD_RATIO')),
     session_date     date         NOT NULL,
     step_number      integer      NOT NULL CHECK (step_number >= 1),
     regress_to_step  integer      NOT NULL CHECK (regress_to_step >= 1),

@@ -4,10 +4,10 @@ import java.time.Instant;
 import java.time.LocalDate;
 
 /**
- * What the trainer is told on the training log: go back to (or hold at) step N after an open alert, or that the
- * clinician has reviewed the latest alert. {@code step} is the most conservative step among the open alerts.
+ * What the trainer is told on the training log: go back to step N after an open alert, or that the clinician has
+ * reviewed the latest alert. {@code step} is the most conservative step among the open alerts.
  */
-public record Advice(AlertKind kind, int step, LocalDate sessionDate, boolean hold, Instant reviewedAt) {
+public record Advice(AlertKind kind, int step, LocalDate sessionDate, Instant reviewedAt) {
 
     public boolean reviewed() {
         return reviewedAt != null;

@@ -17,9 +17,4 @@ public record AlertView(UUID id, UUID patientId, String patientLabel, UUID episo
     public int decimals() {
         return kind == AlertKind.PAIN_DURING || kind == AlertKind.PAIN_NOT_SETTLED ? 0 : 2;
     }
-
-    /** A load-ratio alert tells the trainer to hold at the step rather than go back. */
-    public boolean hold() {
-        return kind == AlertKind.LOAD_RATIO;
-    }
 }

@@ -24,8 +24,7 @@ final class SessionEntryCheck {
         if (plan.step(entry.stepNumber()).isEmpty()) {
             found.add(new FieldViolation("stepNumber", "sessionLog.error.noSuchStep"));
         }
-        if (!entry.asPlanned() && entry.actual().clubId() != null
-                && plan.clubChoices().stream().noneMatch(s -> s.clubId().equals(entry.actual().clubId()))) {
+        if (!entry.asPlanned() && entry.actual().in(plan).isEmpty()) {
             found.add(new FieldViolation("clubId", "sessionLog.error.unknownClub"));
         }
         return found;

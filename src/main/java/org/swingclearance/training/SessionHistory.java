@@ -14,11 +14,12 @@ public record SessionHistory(UUID episodeId, SessionView latest, List<VersionLin
 
     /** One version of the session as it was recorded. */
     public record VersionLine(int version, LocalDate date, int stepNumber, boolean asPlanned, int durationMin,
-                              int rpe, int painDuring, String reason, Instant recordedAt) {
+                              int rpe, int painBefore, int painDuring, String reason, Instant recordedAt) {
 
         static VersionLine of(SessionLogVersion v) {
             return new VersionLine(v.getVersion(), v.getSessionDate(), v.getStepNumber(), v.isAsPlanned(),
-                    v.getDurationMin(), v.getRpe(), v.getPainDuring(), v.getReason(), v.getRecordedAt());
+                    v.getDurationMin(), v.getRpe(), v.getPainBefore(), v.getPainDuring(), v.getReason(),
+                    v.getRecordedAt());
         }
     }
 

@@ -44,6 +44,7 @@ public class SessionLogVersion {
     private double plannedDemandRatio;
     private int durationMin;
     private int rpe;
+    private int painBefore;
     private int painDuring;
     private String notes;
     private String reason;
@@ -54,8 +55,8 @@ public class SessionLogVersion {
     }
 
     SessionLogVersion(UUID id, UUID clinicId, UUID sessionLogId, int version, TrainingPlan plan, TrainingStep step,
-                      SessionEntry entry, Double demandRatio, String reason, UUID recordedBy, Instant recordedAt) {
-        SwingConfiguration done = entry.asPlanned() ? step.configuration() : entry.actual();
+                      SessionEntry entry, SwingConfiguration done, Double demandRatio, String reason, UUID recordedBy,
+                      Instant recordedAt) {
         this.id = id;
         this.clinicId = clinicId;
         this.sessionLogId = sessionLogId;
@@ -82,6 +83,7 @@ public class SessionLogVersion {
         this.plannedDemandRatio = step.demandRatio();
         this.durationMin = entry.durationMin();
         this.rpe = entry.rpe();
+        this.painBefore = entry.painBefore();
         this.painDuring = entry.painDuring();
         this.notes = entry.notes();
         this.reason = reason == null ? null : reason.trim();
@@ -112,6 +114,7 @@ public class SessionLogVersion {
     public double getPlannedDemandRatio() { return plannedDemandRatio; }
     public int getDurationMin() { return durationMin; }
     public int getRpe() { return rpe; }
+    public int getPainBefore() { return painBefore; }
     public int getPainDuring() { return painDuring; }
     public String getNotes() { return notes; }
     public String getReason() { return reason; }

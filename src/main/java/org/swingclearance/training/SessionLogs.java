@@ -297,10 +297,10 @@ public class SessionLogs {
     private SessionLogVersion newVersion(CurrentStaff staff, UUID logId, int number, TrainingPlan plan,
                                          SessionEntry entry, String reason, Instant now) {
         TrainingStep step = plan.step(entry.stepNumber()).orElseThrow();
-        SwingConfiguration done = entry.asPlanned() ? step.configuration() : entry.actual();
+        SwingConfiguration done = entry.asPlanned() ? step.configuration() : entry.actual().in(plan).orElseThrow();
         Double demandRatio = entry.asPlanned() ? step.demandRatio() : plan.demandRatioOf(done);
         SessionLogVersion version = new SessionLogVersion(UUID.randomUUID(), staff.clinicId(), logId, number, plan,
-                step, entry, demandRatio, reason, staff.staffId(), now);
+                step, entry, done, demandRatio, reason, staff.staffId(), now);
         saveAppending(() -> versions.saveAndFlush(version));
         return version;
     }
@@ -372,7 +372,8 @@ public class SessionLogs {
                                     double sessionLoad, Double dose) {
         return new SessionView(log.getId(), v.getVersion(), log.getCreatedBy(), v.getSessionDate(),
                 v.getPlanVersion(), v.getStepNumber(), v.isAsPlanned(), v.done(), v.planned(), v.getDemandRatio(),
-                v.getDurationMin(), v.getRpe(), v.getPainDuring(), morning == null ? null : morning.getPain(),
+                v.getDurationMin(), v.getRpe(), v.getPainBefore(), v.getPainDuring(),
+                morning == null ? null : morning.getPain(),
                 morning == null ? 0 : morning.getVersion(), v.getNotes(), v.getReason(), v.getRecordedAt(),
                 sessionLoad, dose, mayCorrect(staff, log));
     }
@@ -403,21 +404,20 @@ public class SessionLogs {
     }
 
     /**
-     * The trainer's advice: with open alerts, the most conservative step among them (hold for a load-ratio alert
-     * alone); otherwise, for a while after the latest alert was acknowledged, that the clinician reviewed it.
+     * The trainer's advice: with open alerts, the most conservative step among them (the latest alert on a tie);
+     * otherwise, for a while after the latest alert was acknowledged, that the clinician reviewed it.
      */
     private static Advice advice(List<AlertView> alertViews, LocalDate today) {
         Optional<AlertView> strictest = alertViews.stream().filter(AlertView::open)
-                .min(Comparator.comparingInt(AlertView::regressToStep)
-                        .thenComparing(a -> a.kind() == AlertKind.LOAD_RATIO));
+                .min(Comparator.comparingInt(AlertView::regressToStep));
         if (strictest.isPresent()) {
             AlertView a = strictest.get();
-            return new Advice(a.kind(), a.regressToStep(), a.sessionDate(), a.kind() == AlertKind.LOAD_RATIO, null);
+            return new Advice(a.kind(), a.regressToStep(), a.sessionDate(), null);
         }
         return alertViews.stream().findFirst()
                 .filter(a -> a.acknowledgedAt() != null
                         && !a.sessionDate().isBefore(today.minusDays(REVIEWED_NOTICE_DAYS)))
-                .map(a -> new Advice(a.kind(), a.regressToStep(), a.sessionDate(), false, a.acknowledgedAt()))
+                .map(a -> new Advice(a.kind(), a.regressToStep(), a.sessionDate(), a.acknowledgedAt()))
                 .orElse(null);
     }
 

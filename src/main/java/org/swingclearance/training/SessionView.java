@@ -11,7 +11,8 @@ import java.util.UUID;
  */
 public record SessionView(UUID logId, int version, UUID createdBy, LocalDate date, int planVersion, int stepNumber,
                           boolean asPlanned, SwingConfiguration done, SwingConfiguration planned, Double demandRatio,
-                          int durationMin, int rpe, int painDuring, Integer painNextMorning, int morningVersion,
+                          int durationMin, int rpe, int painBefore, int painDuring, Integer painNextMorning,
+                          int morningVersion,
                           String notes, String reason, Instant recordedAt, double sessionLoadAu, Double mechanicalDose,
                           boolean mayCorrect) {
 

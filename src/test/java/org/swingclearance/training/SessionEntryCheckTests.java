@@ -13,7 +13,7 @@ class SessionEntryCheckTests {
     final LocalDate today = TrainingPlanTests.START.plusDays(10);
 
     SessionEntry on(LocalDate day, int step) {
-        return new SessionEntry(day, step, true, null, 40, 5, 2, null);
+        return new SessionEntry(day, step, true, null, 40, 5, 1, 2, null);
     }
 
     @Test
@@ -43,11 +43,11 @@ class SessionEntryCheckTests {
     @Test
     void aClubThePlanDoesNotUseIsRefusedButAnotherClubByMassIsFine() {
         SessionEntry foreignClub = new SessionEntry(today, 2, false,
-                new SwingConfiguration(UUID.randomUUID(), "?", 5, 15, 2, 3, 10), 40, 5, 2, null);
+                new SessionEntry.Actual(UUID.randomUUID(), null, 15, 2, 3, 10), 40, 5, 1, 2, null);
         assertThat(SessionEntryCheck.violations(foreignClub, plan, today))
                 .containsExactly(new FieldViolation("clubId", "sessionLog.error.unknownClub"));
         SessionEntry otherClub = new SessionEntry(today, 2, false,
-                new SwingConfiguration(null, null, 5, 15, 2, 3, 10), 40, 5, 2, null);
+                new SessionEntry.Actual(null, 5.0, 15, 2, 3, 10), 40, 5, 1, 2, null);
         assertThat(SessionEntryCheck.violations(otherClub, plan, today)).isEmpty();
     }
 

@@ -12,12 +12,12 @@ import org.springframework.stereotype.Component;
 import org.swingclearance.training.LoadDay;
 import org.swingclearance.training.SessionView;
 import org.swingclearance.training.Workspace;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
- * The data block the training charts read (a {@code <script type="application/json">}, never inline code): one
- * array per series aligned with the days of the load report, plus the chart labels from the message bundle.
- * Pain and logged demand are the highest of the day's sessions; the page's tables list every session.
+ * The data block the training charts read (a {@code <script type="application/json">} that Thymeleaf's JavaScript
+ * inlining serializes and escapes, never inline code): one array per series aligned with the days of the load
+ * report, plus the chart labels from the message bundle. Pain and logged demand are the highest of the day's
+ * sessions; the page's tables list every session.
  */
 @Component
 class ChartData {
@@ -27,16 +27,14 @@ class ChartData {
         "chart.painLimit", "chart.plannedD", "chart.loggedD", "chart.loadAxis", "chart.ratioAxis", "chart.painAxis",
         "chart.demandAxis"};
 
-    private final JsonMapper json;
     private final MessageSource messages;
 
-    ChartData(JsonMapper json, MessageSource messages) {
-        this.json = json;
+    ChartData(MessageSource messages) {
         this.messages = messages;
     }
 
-    /** The JSON for the page, with {@code <}, {@code >} and {@code &} escaped so it cannot end the script element. */
-    String json(Workspace ws) {
+    /** The chart data of a training log page, serialized into the page by the template. */
+    Map<String, Object> of(Workspace ws) {
         Map<String, Object> data = new LinkedHashMap<>();
         data.put("labels", labels());
         List<String> days = new ArrayList<>();
@@ -70,7 +68,7 @@ class ChartData {
         data.put("painDuring", perDay(ws, days, s -> (double) s.painDuring()));
         data.put("painMorning", perDay(ws, days, s -> s.painNextMorning() == null ? null : s.painNextMorning().doubleValue()));
         data.put("loggedD", perDay(ws, days, SessionView::demandRatio));
-        return json.writeValueAsString(data).replace("<", "\\u003c").replace(">", "\\u003e").replace("&", "\\u0026");
+        return data;
     }
 
     /** The highest value of each day's sessions, aligned with {@code days}; null on days without a value. */

@@ -30,6 +30,7 @@ public class CorrectionForm extends SessionLogForm {
         form.setReps(session.done().reps());
         form.setDurationMin(session.durationMin());
         form.setRpe(session.rpe());
+        form.setPainBefore(session.painBefore());
         form.setPainDuring(session.painDuring());
         form.setNotes(session.notes());
         form.version = session.version();

@@ -11,13 +11,11 @@ import java.time.LocalDate;
 import java.util.UUID;
 import org.springframework.format.annotation.DateTimeFormat;
 import org.swingclearance.training.SessionEntry;
-import org.swingclearance.training.SwingConfiguration;
-import org.swingclearance.training.TrainingPlan;
 import org.swingclearance.training.TrainingStep;
 
 /**
  * A session as the trainer enters it. Ranges: session RPE on the CR-10 scale (0–10, Foster 2001), pain on the
- * 0–10 numeric rating scale, duration 1–600 min. When the session was not done as the step prescribes, the
+ * 0–10 numeric rating scale (before and during the session), duration 1–600 min. When the session was not done as the step prescribes, the
  * actual club (a plan club, or another club's mass), grip mark, cycle time and sets × reps are required.
  */
 public class SessionLogForm {
@@ -53,6 +51,10 @@ public class SessionLogForm {
     @Min(0)
     @Max(10)
     private Integer rpe;
+    @NotNull
+    @Min(0)
+    @Max(10)
+    private Integer painBefore;
     @NotNull
     @Min(0)
     @Max(10)
@@ -99,25 +101,13 @@ public class SessionLogForm {
         reps = step.reps();
     }
 
-    /** Whether the chosen plan club (if any) is one the plan uses. */
-    boolean clubKnownTo(TrainingPlan plan) {
-        return asPlanned || clubId == null || plan.clubChoices().stream().anyMatch(s -> s.clubId().equals(clubId));
-    }
-
-    /** The entry for the service; a plan club's name and mass come from the plan (check {@link #clubKnownTo}). */
-    SessionEntry toEntry(TrainingPlan plan) {
-        SwingConfiguration actual = null;
-        if (!asPlanned) {
-            if (clubId == null) {
-                actual = new SwingConfiguration(null, null, otherClubMassKg, gripMarkCm, cycleTimeS, sets, reps);
-            } else {
-                TrainingStep club = plan.clubChoices().stream().filter(s -> s.clubId().equals(clubId)).findFirst()
-                        .orElseThrow(() -> new IllegalArgumentException("club not in plan: " + clubId));
-                actual = new SwingConfiguration(clubId, club.clubName(), club.clubMassKg(), gripMarkCm, cycleTimeS,
-                        sets, reps);
-            }
-        }
-        return new SessionEntry(sessionDate, stepNumber, asPlanned, actual, durationMin, rpe, painDuring, notes);
+    /** The entry for the service, which resolves a plan club's name and mass from the plan. */
+    SessionEntry toEntry() {
+        SessionEntry.Actual actual = asPlanned ? null
+                : new SessionEntry.Actual(clubId, clubId == null ? otherClubMassKg : null, gripMarkCm, cycleTimeS, sets,
+                        reps);
+        return new SessionEntry(sessionDate, stepNumber, asPlanned, actual, durationMin, rpe, painBefore, painDuring,
+                notes);
     }
 
     public LocalDate getSessionDate() { return sessionDate; }
@@ -142,6 +132,8 @@ public class SessionLogForm {
     public void setDurationMin(Integer durationMin) { this.durationMin = durationMin; }
     public Integer getRpe() { return rpe; }
     public void setRpe(Integer rpe) { this.rpe = rpe; }
+    public Integer getPainBefore() { return painBefore; }
+    public void setPainBefore(Integer painBefore) { this.painBefore = painBefore; }
     public Integer getPainDuring() { return painDuring; }
     public void setPainDuring(Integer painDuring) { this.painDuring = painDuring; }
     public String getNotes() { return notes; }

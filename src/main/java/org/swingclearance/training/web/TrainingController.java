@@ -48,7 +48,7 @@ class TrainingController {
     String workspace(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID episodeId, Model model) {
         Workspace workspace = sessions.workspace(me.staff(), episodeId);
         model.addAttribute("ws", workspace);
-        model.addAttribute("chartJson", charts.json(workspace));
+        model.addAttribute("chartData", charts.of(workspace));
         return WORKSPACE;
     }
 
@@ -69,23 +69,16 @@ class TrainingController {
                       @Valid @ModelAttribute("form") SessionLogForm form, BindingResult errors, Model model,
                       RedirectAttributes redirect) {
         CurrentStaff staff = me.staff();
-        TrainingPlan plan;
         try {
-            plan = sessions.planForLogging(staff, episodeId);
-        } catch (InvalidStateException e) {
-            return backToLog(episodeId, e, redirect);
-        }
-        if (!form.clubKnownTo(plan)) {
-            errors.rejectValue("clubId", "sessionLog.error.unknownClub");
-        }
-        if (errors.hasErrors()) {
-            return logForm(plan, model);
-        }
-        try {
-            sessions.log(staff, episodeId, form.toEntry(plan));
+            if (errors.hasErrors()) {
+                return logForm(sessions.planForLogging(staff, episodeId), model);
+            }
+            sessions.log(staff, episodeId, form.toEntry());
         } catch (SessionEntryRejected e) {
             e.violations().forEach(v -> errors.rejectValue(v.field(), v.code()));
-            return logForm(plan, model);
+            return logForm(sessions.planForLogging(staff, episodeId), model);
+        } catch (InvalidStateException e) {
+            return backToLog(episodeId, e, redirect);
         }
         redirect.addFlashAttribute("flash", "sessionLog.saved");
         return "redirect:/training/episodes/" + episodeId;
@@ -93,8 +86,11 @@ class TrainingController {
 
     @GetMapping("/sessions/{logId}/correct")
     String correctForm(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID episodeId,
-                       @PathVariable UUID logId, Model model) {
+                       @PathVariable UUID logId, Model model, RedirectAttributes redirect) {
         SessionHistory history = sessions.session(me.staff(), episodeId, logId);
+        if (history.plan() == null) {
+            return backToLog(episodeId, new InvalidStateException("training.noPlan"), redirect);
+        }
         model.addAttribute("form", CorrectionForm.from(history.latest()));
         return correctionPage(history, model);
     }
@@ -104,22 +100,14 @@ class TrainingController {
                    @Valid @ModelAttribute("form") CorrectionForm form, BindingResult errors, Model model,
                    RedirectAttributes redirect) {
         CurrentStaff staff = me.staff();
-        SessionHistory history = sessions.session(staff, episodeId, logId);
-        if (history.plan() == null) {
-            return backToLog(episodeId, new InvalidStateException("training.noPlan"), redirect);
-        }
-        if (!form.clubKnownTo(history.plan())) {
-            errors.rejectValue("clubId", "sessionLog.error.unknownClub");
-        }
-        if (errors.hasErrors()) {
-            return correctionPage(history, model);
-        }
         try {
-            sessions.correct(staff, episodeId, logId, form.getVersion(), form.toEntry(history.plan()),
-                    form.getReason());
+            if (errors.hasErrors()) {
+                return correctionPage(sessions.session(staff, episodeId, logId), model);
+            }
+            sessions.correct(staff, episodeId, logId, form.getVersion(), form.toEntry(), form.getReason());
         } catch (SessionEntryRejected e) {
             e.violations().forEach(v -> errors.rejectValue(v.field(), v.code()));
-            return correctionPage(history, model);
+            return correctionPage(sessions.session(staff, episodeId, logId), model);
         } catch (InvalidStateException e) {
             return backToLog(episodeId, e, redirect);
         }
