@@ -43,13 +43,13 @@ public class SessionLogs {
     private final Patients patients;
     private final PlanSource plans;
     private final AlertLimitSource limits;
-    private final LoadMonitor monitor;
+    private final LoadAnalysis analysis;
     private final AuditLog audit;
     private final Clock clock;
 
     SessionLogs(SessionLogRepository logs, SessionLogVersionRepository versions, MorningPainRepository mornings,
                 TrainingAlertRepository alerts, Patients patients, PlanSource plans, AlertLimitSource limits,
-                LoadMonitor monitor, AuditLog audit, Clock clock) {
+                LoadAnalysis analysis, AuditLog audit, Clock clock) {
         this.logs = logs;
         this.versions = versions;
         this.mornings = mornings;
@@ -57,7 +57,7 @@ public class SessionLogs {
         this.patients = patients;
         this.plans = plans;
         this.limits = limits;
-        this.monitor = monitor;
+        this.analysis = analysis;
         this.audit = audit;
         this.clock = clock;
     }
@@ -68,14 +68,15 @@ public class SessionLogs {
         Access access = access(staff, episodeId, "LOAD_READ");
         LocalDate today = today();
         EpisodeSessions sessions = sessionsOf(staff, episodeId);
-        LoadReport load = monitor.report(sessions.latest(), access.plan(), today);
+        AlertLimits current = limits.current(staff.clinicId());
+        LoadView load = analysis.report(sessions.logged(), access.plan(), today, current);
         List<AlertView> alertViews = alertViews(staff, episodeId, access.patientLabel(), sessions);
         audit.record(staff, "LOAD_READ", "Episode", episodeId, access.patientId(), "sessions=" + sessions.latest().size());
         TrainingPlan plan = access.plan();
         return new Workspace(episodeId, access.patientId(), access.patientLabel(), plan,
                 plan == null ? null : plan.currentStepOn(today), today,
-                sessionViews(staff, sessions), alertViews, advice(alertViews, today), load,
-                limits.current(staff.clinicId()), staff.is(StaffRole.CLINICIAN));
+                sessionViews(staff, sessions), alertViews, advice(alertViews, today), load, current,
+                staff.is(StaffRole.CLINICIAN));
     }
 
     /** The plan a new session is logged against; refused (as a state, not an access problem) when none is issued. */
@@ -118,7 +119,7 @@ public class SessionLogs {
         audit.record(staff, "SESSION_LOG_READ", "SessionLog", logId, access.patientId(), "versions=" + all.size());
         SessionLogVersion latest = all.get(0);
         SessionView view = sessionView(staff, log, latest, morning.isEmpty() ? null : morning.get(0),
-                monitor.sessionLoad(latest), monitor.dose(latest));
+                analysis.sessionLoad(latest), analysis.dose(latest));
         return new SessionHistory(episodeId, view, all.stream().map(SessionHistory.VersionLine::of).toList(),
                 morning.stream().map(SessionHistory.MorningLine::of).toList(), access.plan(), access.patientLabel());
     }
@@ -177,9 +178,15 @@ public class SessionLogs {
         saveAppending(() -> mornings.saveAndFlush(entry));
         audit.record(staff, latest == 0 ? "SESSION_MORNING_PAIN" : "SESSION_MORNING_PAIN_CORRECT", "SessionLog",
                 logId, access.patientId(), "version=" + entry.getVersion());
-        AlertLimits current = limits.current(staff.clinicId());
-        monitor.findingForMorning(entry, session, current)
-                .ifPresent(f -> raise(staff, access, session, f, current));
+        TrainingPlan plan = access.plan();
+        if (plan != null && plan.step(session.getStepNumber()).isPresent()) {
+            AlertLimits current = limits.current(staff.clinicId());
+            EpisodeSessions sessions = sessionsOf(staff, log.getEpisodeId());
+            for (AlertFinding f : analysis.findingsForMorning(new LoggedSession(session, pain), entry,
+                    sessions.logged(), plan, current)) {
+                raise(staff, access, session, f, current);
+            }
+        }
     }
 
     /** The clinic's open alerts, newest first, for the clinician's home page. */
@@ -316,15 +323,19 @@ public class SessionLogs {
 
     private void raiseForSession(CurrentStaff staff, Access access, TrainingPlan plan, SessionLogVersion version) {
         AlertLimits current = limits.current(staff.clinicId());
-        List<SessionLogVersion> all = sessionsOf(staff, plan.episodeId()).latest();
-        for (AlertFinding finding : monitor.findingsForSession(version, all, plan, current)) {
+        EpisodeSessions sessions = sessionsOf(staff, plan.episodeId());
+        MorningPain morning = sessions.morning().get(version.getSessionLogId());
+        LoggedSession logged = new LoggedSession(version, morning == null ? null : morning.getPain());
+        for (AlertFinding finding : analysis.findingsForSession(logged, sessions.logged(), plan, current)) {
             raise(staff, access, version, finding, current);
         }
     }
 
     private void raise(CurrentStaff staff, Access access, SessionLogVersion session, AlertFinding finding,
                        AlertLimits current) {
-        if (alerts.existsBySourceIdAndKind(finding.sourceId(), finding.kind())) {
+        if (alerts.existsBySourceIdAndKind(finding.sourceId(), finding.kind())
+                || alerts.existsBySessionLogIdAndKindAndAcknowledgedAtIsNull(session.getSessionLogId(),
+                        finding.kind())) {
             return;
         }
         SessionLog log = logs.findByIdAndClinicId(session.getSessionLogId(), staff.clinicId()).orElseThrow();
@@ -362,7 +373,7 @@ public class SessionLogs {
         List<SessionView> views = new ArrayList<>();
         for (SessionLogVersion v : sessions.latest()) {
             views.add(sessionView(staff, sessions.logs().get(v.getSessionLogId()), v,
-                    sessions.morning().get(v.getSessionLogId()), monitor.sessionLoad(v), monitor.dose(v)));
+                    sessions.morning().get(v.getSessionLogId()), analysis.sessionLoad(v), analysis.dose(v)));
         }
         java.util.Collections.reverse(views);
         return views;
@@ -428,6 +439,14 @@ public class SessionLogs {
     /** An episode's sessions: the latest version of each log in date order, latest morning ratings, the logs. */
     private record EpisodeSessions(List<SessionLogVersion> latest, Map<UUID, MorningPain> morning,
                                    Map<UUID, SessionLog> logs) {
+
+        /** Each session with its latest next-morning pain, in date order. */
+        List<LoggedSession> logged() {
+            return latest.stream().map(v -> {
+                MorningPain m = morning.get(v.getSessionLogId());
+                return new LoggedSession(v, m == null ? null : m.getPain());
+            }).toList();
+        }
 
         boolean superseded(TrainingAlert alert) {
             UUID logId = alert.getSessionLogId();

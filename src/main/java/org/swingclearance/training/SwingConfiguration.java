@@ -21,4 +21,17 @@ public record SwingConfiguration(UUID clubId, String clubName, double clubMassKg
                 && Double.compare(gripMarkCm, other.gripMarkCm) == 0
                 && Double.compare(cycleTimeS, other.cycleTimeS) == 0;
     }
+
+    /**
+     * Heavier than a step on any one dial (the product's definition): a heavier club, a grip mark further from the
+     * head (closer to the knob, so a longer lever) or a shorter cycle time.
+     */
+    public boolean heavierOnAnyDialThan(SwingConfiguration step) {
+        return clubMassKg > step.clubMassKg || gripMarkCm < step.gripMarkCm || cycleTimeS < step.cycleTimeS;
+    }
+
+    /** The same dials and the same sets × reps. */
+    public boolean sameAs(SwingConfiguration other) {
+        return sameDials(other) && sets == other.sets && reps == other.reps;
+    }
 }

@@ -17,4 +17,6 @@ interface TrainingAlertRepository extends JpaRepository<TrainingAlert, UUID> {
     List<TrainingAlert> findByClinicIdAndPatientIdOrderByRaisedAtDesc(UUID clinicId, UUID patientId);
 
     boolean existsBySourceIdAndKind(UUID sourceId, AlertKind kind);
+
+    boolean existsBySessionLogIdAndKindAndAcknowledgedAtIsNull(UUID sessionLogId, AlertKind kind);
 }

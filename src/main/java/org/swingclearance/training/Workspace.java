@@ -11,5 +11,5 @@ import java.util.UUID;
  */
 public record Workspace(UUID episodeId, UUID patientId, String patientLabel, TrainingPlan plan,
                         TrainingStep todaysStep, LocalDate today, List<SessionView> sessions, List<AlertView> alerts,
-                        Advice advice, LoadReport load, AlertLimits limits, boolean clinicianView) {
+                        Advice advice, LoadView load, AlertLimits limits, boolean clinicianView) {
 }
