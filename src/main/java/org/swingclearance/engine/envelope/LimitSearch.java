@@ -31,15 +31,14 @@ final class LimitSearch {
      * @param lenient   the other end
      */
     static double nearestPermitted(DoubleUnaryOperator ratio, double demanding, double lenient) {
-        double step = (lenient - demanding) / GRID;
         double range = Math.abs(lenient - demanding);
         double r0 = ratio.applyAsDouble(demanding);
         if (r0 <= 1.0) {
             return demanding;
         }
-        double r1 = ratio.applyAsDouble(demanding + step);
+        double r1 = ratio.applyAsDouble(point(demanding, lenient, 1));
         if (r1 > 1.0 && r0 < r1) {
-            double dip = dipBelowOne(ratio, demanding, demanding + step);
+            double dip = dipBelowOne(ratio, demanding, point(demanding, lenient, 1));
             if (!Double.isNaN(dip)) {
                 return bisect(ratio, demanding, dip, range);
             }
@@ -47,30 +46,37 @@ final class LimitSearch {
         double beforePrevious = r0;
         double previous = r1;
         for (int i = 1; i <= GRID; i++) {
-            double x = demanding + i * step;
+            double before = point(demanding, lenient, i - 1);
+            double x = point(demanding, lenient, i);
             if (previous <= 1.0) {
-                return bisect(ratio, x - step, x, range);
+                return bisect(ratio, before, x, range);
             }
             if (i == GRID) {
                 if (previous < beforePrevious) {
-                    double dip = dipBelowOne(ratio, x - step, x);
+                    double dip = dipBelowOne(ratio, before, x);
                     if (!Double.isNaN(dip)) {
-                        return bisect(ratio, x - step, dip, range);
+                        return bisect(ratio, before, dip, range);
                     }
                 }
                 break;
             }
-            double next = ratio.applyAsDouble(x + step);
+            double after = point(demanding, lenient, i + 1);
+            double next = ratio.applyAsDouble(after);
             if (next > 1.0 && previous <= beforePrevious && previous <= next) {
-                double dip = dipBelowOne(ratio, x - step, x + step);
+                double dip = dipBelowOne(ratio, before, after);
                 if (!Double.isNaN(dip)) {
-                    return bisect(ratio, x - step, dip, range);
+                    return bisect(ratio, before, dip, range);
                 }
             }
             beforePrevious = previous;
             previous = next;
         }
         return Double.NaN;
+    }
+
+    /** Grid point i of GRID; the last is exactly the lenient end, never a rounding step past it. */
+    private static double point(double demanding, double lenient, int i) {
+        return i == GRID ? lenient : demanding + (lenient - demanding) * i / GRID;
     }
 
     /** Bisects between a not-permitted point and a permitted one; returns the permitted end of the final bracket. */
