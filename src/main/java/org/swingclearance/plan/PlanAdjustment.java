@@ -1,5 +1,6 @@
 package org.swingclearance.plan;
 
+import jakarta.persistence.Column;
 import jakarta.persistence.Embeddable;
 import jakarta.persistence.EnumType;
 import jakarta.persistence.Enumerated;
@@ -13,6 +14,7 @@ public class PlanAdjustment {
     private AdjustmentKind kind;
     private UUID clubId;
     private double gripMarkCm;
+    @Column(name = "cycle_time_s")
     private double cycleTimeS;
 
     protected PlanAdjustment() {

@@ -1,5 +1,8 @@
 package org.swingclearance.plan;
 
+import org.hibernate.annotations.JdbcTypeCode;
+import org.hibernate.type.SqlTypes;
+import jakarta.persistence.Column;
 import jakarta.persistence.CollectionTable;
 import jakarta.persistence.ElementCollection;
 import jakarta.persistence.Entity;
@@ -44,6 +47,7 @@ public class PlanVersion {
     private String patternName;
     private UUID targetClubId;
     private Double targetGripMarkCm;
+    @Column(name = "target_cycle_time_s")
     private Double targetCycleTimeS;
     private boolean continueProvisionally;
     @Enumerated(EnumType.STRING)
@@ -56,6 +60,7 @@ public class PlanVersion {
     private String inputs;
     private String outcomeKey;
     private String outcomeArgs;
+    @JdbcTypeCode(SqlTypes.CHAR)
     private String contentSha256;
     private Instant createdAt;
     private UUID createdBy;

@@ -1,5 +1,6 @@
 package org.swingclearance.plan;
 
+import jakarta.persistence.Column;
 import jakarta.persistence.Embeddable;
 import java.time.LocalDate;
 import java.util.UUID;
@@ -17,6 +18,7 @@ public class PlannedStep {
     private String clubName;
     private double clubMassKg;
     private double gripMarkCm;
+    @Column(name = "cycle_time_s")
     private double cycleTimeS;
     private String changedDial;
     private int sets;
