@@ -1,5 +1,6 @@
 package org.swingclearance.training;
 
+import jakarta.persistence.Column;
 import jakarta.persistence.Entity;
 import jakarta.persistence.Id;
 import jakarta.persistence.Table;
@@ -31,6 +32,7 @@ public class SessionLogVersion {
     private String clubName;
     private double clubMassKg;
     private double gripMarkCm;
+    @Column(name = "cycle_time_s")
     private double cycleTimeS;
     private int sets;
     private int reps;
@@ -38,6 +40,7 @@ public class SessionLogVersion {
     private UUID plannedClubId;
     private double plannedClubMassKg;
     private double plannedGripMarkCm;
+    @Column(name = "planned_cycle_time_s")
     private double plannedCycleTimeS;
     private int plannedSets;
     private int plannedReps;

@@ -305,7 +305,7 @@ public class SessionLogs {
                                          SessionEntry entry, String reason, Instant now) {
         TrainingStep step = plan.step(entry.stepNumber()).orElseThrow();
         SwingConfiguration done = entry.asPlanned() ? step.configuration() : entry.actual().in(plan).orElseThrow();
-        Double demandRatio = entry.asPlanned() ? step.demandRatio() : plan.demandRatioOf(done);
+        Double demandRatio = entry.asPlanned() ? Double.valueOf(step.demandRatio()) : plan.demandRatioOf(done);
         SessionLogVersion version = new SessionLogVersion(UUID.randomUUID(), staff.clinicId(), logId, number, plan,
                 step, entry, done, demandRatio, reason, staff.staffId(), now);
         saveAppending(() -> versions.saveAndFlush(version));

@@ -107,10 +107,12 @@ class SessionLogWebTests extends PostgresTestBase {
     void aTrainerLogsASessionAndSeesItOnTheTrainingLog() throws Exception {
         mvc.perform(logSession(clinic.trainer())).andExpect(status().is3xxRedirection());
         assertThat(logsOfEpisode()).isEqualTo(1);
-        mvc.perform(get("/training/episodes/{id}", plan.episodeId()).with(data.as(clinic.trainer())))
+        Workspace ws = (Workspace) mvc.perform(get("/training/episodes/{id}", plan.episodeId())
+                        .with(data.as(clinic.trainer())))
                 .andExpect(status().isOk()).andExpect(view().name("training/workspace"))
-                .andExpect(model().attribute("ws", org.hamcrest.Matchers.hasProperty("sessions",
-                        org.hamcrest.Matchers.hasSize(1))));
+                .andReturn().getModelAndView().getModel().get("ws");
+        assertThat(ws.sessions()).hasSize(1);
+        assertThat(ws.sessions().get(0).sessionLoadAu()).isEqualTo(200.0); // RPE 5 × 40 min (Foster et al. 2001)
         Integer audited = jdbc.queryForObject("select count(*) from audit_event where clinic_id = ? and action = ?"
                 + " and outcome = 'SUCCESS'", Integer.class, clinic.id(), "SESSION_LOG_CREATE");
         assertThat(audited).isEqualTo(1);

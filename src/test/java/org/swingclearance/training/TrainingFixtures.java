@@ -16,8 +16,7 @@ import org.swingclearance.support.TestData.TestClinic;
 /**
  * An issued plan for the training tests, shared with the clinic's trainer through the plan feature's real sharing
  * (consent recorded, then {@link Plans#share}). The plan rows themselves are written directly: generating a plan
- * needs a signed screening and an envelope, which the plan feature's own tests cover. Invented data: four steps a
- * week apart from {@code START_DAYS_AGO} days ago, each changing one dial, the fourth behind a re-screen gate.
+ * needs a signed screening and an envelope, which the plan feature's own tests cover. Invented data.
  */
 public class TrainingFixtures {
 
@@ -38,15 +37,21 @@ public class TrainingFixtures {
         this.tx = tx;
     }
 
-    /** A patient, a shoulder episode and its issued plan, shared with every given trainer. */
+    /** A patient, a shoulder episode and its issued plan started {@link #START_DAYS_AGO} days ago, shared. */
     public SharedPlan sharedPlan(TestClinic clinic, CurrentStaff... trainers) {
+        return sharedPlan(clinic, START_DAYS_AGO, trainers);
+    }
+
+    /** A patient, a shoulder episode and its issued plan started {@code daysAgo} days ago, shared with the trainers. */
+    public SharedPlan sharedPlan(TestClinic clinic, int daysAgo, CurrentStaff... trainers) {
         UUID patientId = data.patient(clinic);
         UUID episodeId = data.shoulderEpisode(clinic, patientId);
-        UUID planId = issuedPlan(clinic, patientId, episodeId);
+        LocalDate start = LocalDate.now(ZoneOffset.UTC).minusDays(daysAgo);
+        UUID planId = issuedPlan(clinic, patientId, episodeId, start);
         for (CurrentStaff trainer : trainers) {
             share(clinic, patientId, planId, trainer);
         }
-        return new SharedPlan(patientId, episodeId, planId, LocalDate.now(ZoneOffset.UTC).minusDays(START_DAYS_AGO));
+        return new SharedPlan(patientId, episodeId, planId, start);
     }
 
     /** Shares the plan with a trainer, recording the patient's consent first. */
@@ -56,13 +61,15 @@ public class TrainingFixtures {
         plans.share(clinic.clinician(), planId, trainer.staffId());
     }
 
-    /** Steps: 1 light club, grip 20 cm, 2.5 s; 2 grip 15 cm; 3 cycle 2.0 s; 4 heavy club (provisional). */
-    private UUID issuedPlan(TestClinic clinic, UUID patientId, UUID episodeId) {
+    /**
+     * Steps a week apart: 1 light club (4 kg), grip 20 cm, 2.5 s, D 0.18; 2 grip 15 cm, D 0.20; 3 cycle 2.0 s,
+     * D 0.22; 4 heavy club (6 kg), D 0.24, provisional behind a re-screen gate. Three sessions a week.
+     */
+    private UUID issuedPlan(TestClinic clinic, UUID patientId, UUID episodeId, LocalDate start) {
         UUID planId = UUID.randomUUID();
         UUID versionId = UUID.randomUUID();
         UUID light = UUID.randomUUID();
         UUID heavy = UUID.randomUUID();
-        LocalDate start = LocalDate.now(ZoneOffset.UTC).minusDays(START_DAYS_AGO);
         Timestamp now = Timestamp.from(Instant.now());
         UUID clinician = clinic.clinician().staffId();
         tx.executeWithoutResult(s -> {
