@@ -2,7 +2,7 @@
 -- trainer (or clinician) recorded after the session, every later version is a correction with a mandatory reason.
 -- The next-morning pain is a separate append-only observation of the same log (recorded the next day, correctable
 -- the same way). Nothing here is ever updated or deleted: the database refuses it, not just the code.
--- plan_id / plan_version / step_number name the issued plan step the session belongs to (the plan feature's tables).
+-- plan_id / plan_version / step_number name the issued plan step the session belongs to (the plan feature's V40).
 
 CREATE TABLE session_log (
     id              uuid PRIMARY KEY,
@@ -19,7 +19,7 @@ CREATE TABLE session_log_version (
     clinic_id             uuid         NOT NULL REFERENCES clinic (id),
     session_log_id        uuid         NOT NULL REFERENCES session_log (id),
     version               integer      NOT NULL CHECK (version >= 1),
-    plan_id               uuid         NOT NULL,
+    plan_id               uuid         NOT NULL REFERENCES plan (id),
     plan_version          integer      NOT NULL CHECK (plan_version >= 1),
     step_number           integer      NOT NULL CHECK (step_number >= 1),
     session_date          date         NOT NULL,
