@@ -140,6 +140,17 @@ public final class Citations {
             "No published missing-item rule: every item must be answered", COMMON_PRACTICE, NOT_STATED,
             "clinical.md §4.5");
 
+    // §5 red flags
+    public static final Citation SHOULDER_RED_FLAGS = new Citation(
+            "BESS/BOA shoulder pathways (Rees et al. 2021, Shoulder Elbow 13:5–11), flag list as reproduced by NHS "
+                    + "pathway pages", SECONDARY, HIGH, "clinical.md §5.1");
+    public static final Citation FINUCANE_2020 = new Citation(
+            "Finucane et al. 2020, JOSPT 50:350–372 (IFOMPT framework for serious spinal pathology)", VERIFIED, HIGH,
+            "clinical.md §5.2");
+    public static final Citation CONDITIONAL_URGENCY = new Citation(
+            "Where the pathway's urgency depends on what is suspected, the more urgent class is used", COMMON_PRACTICE,
+            NOT_STATED, "clinical.md §5");
+
     // §6–7 pain monitoring and training load
     public static final Citation SILBERNAGEL_2007 = new Citation(
             "Silbernagel et al. 2007, Am J Sports Med 35:897–906 (pain-monitoring model: during ≤ 5/10, settled by "

@@ -8,7 +8,8 @@ import java.util.OptionalInt;
  * A graded plan: its steps in order, the goal it was heading for, why it stops short (if it does), and the ceiling —
  * the harder neighbours of the last step that cannot be taken, with reasons.
  *
- * @param goal empty only when no permitted state exists to start from
+ * @param goal  the state the last leg was heading for; empty when the plan could not start (see the shortfall)
+ * @param steps empty when the plan could not start
  */
 public record Plan(List<PlanStep> steps, Optional<PlanState> goal, Optional<Shortfall> shortfall,
                    List<Blocker> ceiling) {

@@ -8,7 +8,7 @@ import java.util.Optional;
 /**
  * The graded-plan search (engine.md §7). Built once per plan space and evaluator (every state is evaluated exactly
  * once); {@link #plan} may then be called for any number of requests, e.g. while the clinician pins and removes
- * steps. Not thread-safe.
+ * steps. Immutable after construction, so {@link #plan} may run concurrently.
  *
  * <p>A plan is a chain of legs: start → each pinned state in order → goal. Without a target the goal is the
  * permitted state with the highest D in the current band; with a provisional continuation the plan then goes on to
@@ -16,7 +16,9 @@ import java.util.Optional;
  * provisional behind a re-screen gate. With a target, the plan heads straight for it (through the gate when the
  * target lies in the next band and provisional steps were asked for). Each leg is the best path by
  * {@link LegFinder}. When a waypoint cannot be reached, the plan ends at the best reachable state — the one with the
- * highest D for the "highest" goals, else the one closest to the waypoint in dial steps — and says why.
+ * highest D for the "highest" goals, else the one closest to the waypoint in dial steps — and says why; the one
+ * exception is the highest permitted state on the way to a provisional continuation, which is only a way station:
+ * the continuation then sets out from the highest state the current band reaches.
  */
 public final class PlanSearch {
 
@@ -80,6 +82,9 @@ public final class PlanSearch {
                     goalSlot = StepGraph.slot(fallback);
                 }
                 continue; // another state with the same highest D was reached: the goal is met
+            }
+            if (waypoint.kind() == WaypointKind.HIGHEST_PERMITTED && request.provisionalContinuation()) {
+                continue; // only a way station: the continuation sets out from the highest state the band reaches
             }
             shortfall = shortfall(graph, waypoint, leg);
             break;
