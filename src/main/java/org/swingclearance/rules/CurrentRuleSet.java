@@ -43,6 +43,11 @@ public record CurrentRuleSet(UUID id, UUID clinicId, int version, Instant create
         return settings.gripFraction();
     }
 
+    /** True when the grip constraint uses each band's own fraction. */
+    public boolean gripFollowsBand() {
+        return Double.isNaN(settings.gripFraction());
+    }
+
     /** The fraction the grip constraint (C3) uses in a band. */
     public double gripFractionFor(LoadBand band) {
         return Double.isNaN(settings.gripFraction()) ? fraction(band) : settings.gripFraction();

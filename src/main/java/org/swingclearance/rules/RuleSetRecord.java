@@ -12,7 +12,9 @@ import jakarta.persistence.JoinColumn;
 import jakarta.persistence.MapKeyColumn;
 import jakarta.persistence.MapKeyEnumerated;
 import jakarta.persistence.OrderColumn;
+import jakarta.persistence.PostPersist;
 import jakarta.persistence.Table;
+import jakarta.persistence.Transient;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -20,6 +22,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.UUID;
 import org.hibernate.annotations.Immutable;
+import org.springframework.data.domain.Persistable;
 import org.swingclearance.engine.rules.LoadBand;
 import org.swingclearance.engine.scoring.Instrument;
 import org.swingclearance.engine.scoring.Mcid;
@@ -33,7 +36,7 @@ import org.swingclearance.engine.scoring.Spadi;
 @Entity
 @Immutable
 @Table(name = "practice_rule_set")
-class RuleSetRecord {
+class RuleSetRecord implements Persistable<UUID> {
 
     @Id
     private UUID id;
@@ -85,12 +88,17 @@ class RuleSetRecord {
     @MapKeyEnumerated(EnumType.STRING)
     private Map<Instrument, McidRow> mcids = new EnumMap<>(Instrument.class);
 
+    /** True until stored: a version is only ever inserted (never merged), so Spring Data must persist it. */
+    @Transient
+    private boolean unsaved;
+
     protected RuleSetRecord() {
     }
 
     /** A new version from complete settings. */
     RuleSetRecord(UUID id, UUID clinicId, int version, UUID createdBy, Instant createdAt, String changeNote,
                   RuleSetSettings s) {
+        this.unsaved = true;
         this.id = id;
         this.clinicId = clinicId;
         this.version = version;
@@ -118,7 +126,15 @@ class RuleSetRecord {
         s.scoringPolicy().mcids().forEach((instrument, m) -> mcids.put(instrument, new McidRow(m)));
     }
 
-    UUID getId() { return id; }
+    @Override
+    public UUID getId() { return id; }
+
+    @Override
+    public boolean isNew() { return unsaved; }
+
+    @PostPersist
+    void stored() { unsaved = false; }
+
     UUID getClinicId() { return clinicId; }
     int getVersion() { return version; }
 

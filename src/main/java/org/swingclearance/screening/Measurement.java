@@ -85,6 +85,15 @@ public enum Measurement {
         this.sided = sided;
     }
 
+    /** The engine measure this value feeds: the same name, except the trials (GRIP, CKCUEST_TRIALS). */
+    public String engineName() {
+        return switch (this) {
+            case GRIP_TRIAL_1, GRIP_TRIAL_2, GRIP_TRIAL_3 -> "GRIP";
+            case CKCUEST_TRIAL_1, CKCUEST_TRIAL_2, CKCUEST_TRIAL_3, CKCUEST_TRIAL_4 -> "CKCUEST_TRIALS";
+            default -> name();
+        };
+    }
+
     public ScreeningSection section() { return section; }
     public MeasureUnit unit() { return unit; }
     public double min() { return min; }

@@ -81,6 +81,23 @@ public final class Measurements {
         return items(questionnaire).stream().anyMatch(java.util.Objects::nonNull);
     }
 
+    /**
+     * The names of the engine measures with at least one recorded value (grip and CKCUEST trials count for the
+     * engine's GRIP and CKCUEST_TRIALS, a questionnaire for its instrument); patient facts are not included.
+     */
+    public Set<String> recordedEngineMeasures() {
+        Set<String> names = new java.util.TreeSet<>();
+        for (String key : values.keySet()) {
+            MeasurementField field = MeasurementCatalog.field(key).orElseThrow();
+            if (field.questionnaire() != null) {
+                names.add(field.questionnaire().name());
+            } else {
+                names.add(field.measurement().engineName());
+            }
+        }
+        return names;
+    }
+
     @Override
     public boolean equals(Object o) {
         return o instanceof Measurements m && m.values.equals(values) && m.redFlags.equals(redFlags);

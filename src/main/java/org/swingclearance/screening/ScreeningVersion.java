@@ -9,6 +9,7 @@ import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 import java.time.Instant;
 import java.util.UUID;
+import java.util.function.Function;
 import org.hibernate.annotations.JdbcTypeCode;
 import org.hibernate.type.SqlTypes;
 
@@ -77,9 +78,12 @@ class ScreeningVersion {
         apply(content, now);
     }
 
-    /** Freezes the draft with the decided bands; from now on the database refuses any change to this row. */
+    /**
+     * Freezes the draft with the decided bands and seals it with the hash of its final content; from the flush on,
+     * the database refuses any change to this row.
+     */
     void sign(String shoulderBand, String shoulderReason, String lumbopelvicBand, String lumbopelvicReason,
-              UUID signer, Instant at, byte[] hash) {
+              UUID signer, Instant at, Function<ScreeningVersion, byte[]> contentHash) {
         requireDraft();
         this.shoulderBand = shoulderBand;
         this.shoulderOverrideReason = shoulderReason;
@@ -87,9 +91,9 @@ class ScreeningVersion {
         this.lumbopelvicOverrideReason = lumbopelvicReason;
         this.signedBy = signer;
         this.signedAt = at;
-        this.contentHash = hash;
         this.updatedAt = at;
         this.status = versionNo == 1 ? ScreeningStatus.SIGNED : ScreeningStatus.AMENDED;
+        this.contentHash = contentHash.apply(this);
     }
 
     private void apply(StoredContent content, Instant now) {

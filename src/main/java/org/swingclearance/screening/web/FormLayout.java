@@ -20,6 +20,11 @@ final class FormLayout {
     /** One section: measurement rows, and for the questionnaire section the item groups. */
     record Section(ScreeningSection section, List<Row> rows, List<ItemGroup> questionnaires) {
 
+        /** True when any row is taken per side (then the table has left and right columns). */
+        public boolean anySided() {
+            return rows.stream().anyMatch(Row::sided);
+        }
+
         public String id() {
             return "section-" + section.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
         }
