@@ -43,7 +43,7 @@ CREATE TABLE plan_version (
     inputs                   text         NOT NULL,
     outcome_key              varchar(120),
     outcome_args             varchar(1000),
-    content_sha256           char(64),
+    content_sha256           varchar(64) CHECK (length(content_sha256) = 64),
     created_at               timestamptz  NOT NULL,
     created_by               uuid         NOT NULL REFERENCES staff_account (id),
     issued_at                timestamptz,

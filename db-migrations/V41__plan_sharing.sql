@@ -29,7 +29,7 @@ CREATE TABLE trainer_invitation (
     consent_id      uuid         NOT NULL REFERENCES share_consent (id),
     email           varchar(254) NOT NULL,
     invited_name    varchar(200) NOT NULL,
-    token_sha256    char(64)     NOT NULL,
+    token_sha256    varchar(64)  NOT NULL CHECK (length(token_sha256) = 64),
     created_at      timestamptz  NOT NULL,
     created_by      uuid         NOT NULL REFERENCES staff_account (id),
     expires_at      timestamptz  NOT NULL,

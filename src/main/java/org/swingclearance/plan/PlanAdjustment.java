@@ -14,7 +14,7 @@ public class PlanAdjustment {
     private AdjustmentKind kind;
     private UUID clubId;
     private double gripMarkCm;
-    @Column(name = "cycle_time_s")
+    @Column(name = "cycle_time_s") // the naming strategy would drop the underscore before a final capital
     private double cycleTimeS;
 
     protected PlanAdjustment() {
@@ -25,12 +25,6 @@ public class PlanAdjustment {
         this.clubId = clubId;
         this.gripMarkCm = gripMarkCm;
         this.cycleTimeS = cycleTimeS;
-    }
-
-    /** Whether this adjustment names the same state as the step (grip marks and cycle times to 1e-6). */
-    boolean sameStateAs(PlannedStep step) {
-        return clubId.equals(step.getClubId()) && Math.abs(gripMarkCm - step.getGripMarkCm()) < 1e-6
-                && Math.abs(cycleTimeS - step.getCycleTimeS()) < 1e-6;
     }
 
     public AdjustmentKind getKind() { return kind; }

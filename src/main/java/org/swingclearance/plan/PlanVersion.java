@@ -1,7 +1,5 @@
 package org.swingclearance.plan;
 
-import org.hibernate.annotations.JdbcTypeCode;
-import org.hibernate.type.SqlTypes;
 import jakarta.persistence.Column;
 import jakarta.persistence.CollectionTable;
 import jakarta.persistence.ElementCollection;
@@ -47,7 +45,7 @@ public class PlanVersion {
     private String patternName;
     private UUID targetClubId;
     private Double targetGripMarkCm;
-    @Column(name = "target_cycle_time_s")
+    @Column(name = "target_cycle_time_s") // the naming strategy would drop the underscore before a final capital
     private Double targetCycleTimeS;
     private boolean continueProvisionally;
     @Enumerated(EnumType.STRING)
@@ -60,7 +58,6 @@ public class PlanVersion {
     private String inputs;
     private String outcomeKey;
     private String outcomeArgs;
-    @JdbcTypeCode(SqlTypes.CHAR)
     private String contentSha256;
     private Instant createdAt;
     private UUID createdBy;

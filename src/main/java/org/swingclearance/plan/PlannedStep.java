@@ -18,7 +18,7 @@ public class PlannedStep {
     private String clubName;
     private double clubMassKg;
     private double gripMarkCm;
-    @Column(name = "cycle_time_s")
+    @Column(name = "cycle_time_s") // the naming strategy would drop the underscore before a final capital
     private double cycleTimeS;
     private String changedDial;
     private int sets;

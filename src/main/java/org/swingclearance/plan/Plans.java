@@ -1,6 +1,7 @@
 package org.swingclearance.plan;
 
 import java.time.Clock;
+import java.time.Instant;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
@@ -14,6 +15,8 @@ import org.swingclearance.identity.Clinic;
 import org.swingclearance.identity.CurrentStaff;
 import org.swingclearance.identity.StaffAccounts;
 import org.swingclearance.identity.StaffRole;
+import org.swingclearance.patient.EpisodeSummary;
+import org.swingclearance.patient.Patients;
 import org.swingclearance.web.ConflictException;
 import org.swingclearance.web.InvalidStateException;
 import org.swingclearance.web.NotFoundException;
@@ -32,25 +35,128 @@ public class Plans {
     private final PlanShareRepository shares;
     private final PlanAccess access;
     private final PlanSharing sharing;
+    private final PlanDrafting drafting;
+    private final PlanPages pages;
     private final PlanViews views;
     private final HandoutRenderer handouts;
+    private final Patients patients;
     private final StaffAccounts staffAccounts;
     private final AuditLog audit;
     private final Clock clock;
 
     Plans(GradedPlanRepository plans, PlanVersionRepository versions, PlanShareRepository shares, PlanAccess access,
-          PlanSharing sharing, PlanViews views, HandoutRenderer handouts, StaffAccounts staffAccounts, AuditLog audit,
-          Clock clock) {
+          PlanSharing sharing, PlanDrafting drafting, PlanPages pages, PlanViews views, HandoutRenderer handouts,
+          Patients patients, StaffAccounts staffAccounts, AuditLog audit, Clock clock) {
         this.plans = plans;
         this.versions = versions;
         this.shares = shares;
         this.access = access;
         this.sharing = sharing;
+        this.drafting = drafting;
+        this.pages = pages;
         this.views = views;
         this.handouts = handouts;
+        this.patients = patients;
         this.staffAccounts = staffAccounts;
         this.audit = audit;
         this.clock = clock;
+    }
+
+    // ---- The clinician's plan page and drafting ----
+
+    /** The plan page of an episode of the caller's clinic; a read of the plan (when there is one) is audited. */
+    @Transactional
+    public PlanPage page(CurrentStaff clinician, UUID episodeId) {
+        EpisodeSummary episode = episode(clinician, episodeId, "PLAN_READ");
+        Optional<GradedPlan> plan = plans.findByClinicIdAndEpisodeId(clinician.clinicId(), episodeId);
+        plan.ifPresent(p -> audit.record(clinician, "PLAN_READ", "Plan", p.getId(), p.getPatientId(), "page"));
+        return pages.page(clinician, episode, plan.orElse(null));
+    }
+
+    /**
+     * A first draft (or, when the plan has only issued versions, the next one) computed from the latest signed
+     * screening with the given settings; refused with the reason when no plan can be made.
+     */
+    @Transactional
+    public UUID generate(CurrentStaff clinician, UUID episodeId, PlanSettings settings) {
+        EpisodeSummary episode = episode(clinician, episodeId, "PLAN_CREATE");
+        GradedPlan plan = plans.findByClinicIdAndEpisodeId(clinician.clinicId(), episodeId).orElse(null);
+        int number = 1;
+        if (plan != null) {
+            if (draft(plan).isPresent()) {
+                throw new InvalidStateException("plan.error.draftExists");
+            }
+            number = versions.findFirstByClinicIdAndPlanIdOrderByNumberDesc(clinician.clinicId(), plan.getId())
+                    .map(v -> v.getNumber() + 1).orElse(1);
+        }
+        Instant now = clock.instant();
+        boolean created = plan == null;
+        if (created) {
+            plan = new GradedPlan(UUID.randomUUID(), clinician.clinicId(), episodeId, episode.patientId(), now,
+                    clinician.staffId());
+        }
+        PlanVersion draft = new PlanVersion(UUID.randomUUID(), clinician.clinicId(), plan.getId(), number, now,
+                clinician.staffId());
+        drafting.compute(clinician, episode, draft, settings);
+        if (created) {
+            plans.saveAndFlush(plan);
+        }
+        versions.saveAndFlush(draft);
+        audit.record(clinician, "PLAN_CREATE", "Plan", plan.getId(), plan.getPatientId(), "version=" + number);
+        return plan.getId();
+    }
+
+    /** Starts the next version from the current issued one's settings and adjustments, recomputed. */
+    @Transactional
+    public void revise(CurrentStaff clinician, UUID planId) {
+        GradedPlan plan = access.ownedByClinic(clinician, planId, "PLAN_CREATE");
+        if (draft(plan).isPresent()) {
+            throw new InvalidStateException("plan.error.draftExists");
+        }
+        PlanVersion issued = currentIssuedVersion(plan).orElseThrow(() -> new InvalidStateException("plan.error.noDraft"));
+        PlanVersion next = issued.nextDraft(UUID.randomUUID(), clock.instant(), clinician.staffId());
+        drafting.compute(clinician, episode(clinician, plan.getEpisodeId(), "PLAN_CREATE"), next, issued.settings());
+        versions.saveAndFlush(next);
+        audit.record(clinician, "PLAN_CREATE", "Plan", planId, plan.getPatientId(),
+                "version=" + next.getNumber() + ",from=" + issued.getNumber());
+    }
+
+    /** New settings for the draft, recomputed from the latest sources; a stale form is a conflict. */
+    @Transactional
+    public void updateSettings(CurrentStaff clinician, UUID planId, long expectedLockVersion, PlanSettings settings) {
+        GradedPlan plan = access.ownedByClinic(clinician, planId, "PLAN_UPDATE");
+        PlanVersion draft = lockedDraft(clinician, plan, expectedLockVersion);
+        drafting.compute(clinician, episode(clinician, plan.getEpisodeId(), "PLAN_UPDATE"), draft, settings);
+        versions.saveAndFlush(draft);
+        audit.record(clinician, "PLAN_UPDATE", "Plan", planId, plan.getPatientId(),
+                "version=" + draft.getNumber() + ",settings");
+    }
+
+    /** Pins a step of the draft (the plan must pass through it) or removes it (re-planned around it). */
+    @Transactional
+    public void adjust(CurrentStaff clinician, UUID planId, long expectedLockVersion, int stepNumber,
+                       AdjustmentKind kind) {
+        GradedPlan plan = access.ownedByClinic(clinician, planId, "PLAN_UPDATE");
+        PlanVersion draft = lockedDraft(clinician, plan, expectedLockVersion);
+        PlannedStep step = draft.getSteps().stream().filter(s -> s.getNumber() == stepNumber).findFirst()
+                .orElseThrow(() -> new InvalidStateException("plan.error.noSuchStep"));
+        draft.adjust(new PlanAdjustment(kind, step.getClubId(), step.getGripMarkCm(), step.getCycleTimeS()));
+        drafting.compute(clinician, episode(clinician, plan.getEpisodeId(), "PLAN_UPDATE"), draft, draft.settings());
+        versions.saveAndFlush(draft);
+        audit.record(clinician, "PLAN_UPDATE", "Plan", planId, plan.getPatientId(),
+                "version=" + draft.getNumber() + "," + kind + "=step " + stepNumber);
+    }
+
+    /** Forgets every pin and removal of the draft and recomputes it. */
+    @Transactional
+    public void clearAdjustments(CurrentStaff clinician, UUID planId, long expectedLockVersion) {
+        GradedPlan plan = access.ownedByClinic(clinician, planId, "PLAN_UPDATE");
+        PlanVersion draft = lockedDraft(clinician, plan, expectedLockVersion);
+        draft.clearAdjustments();
+        drafting.compute(clinician, episode(clinician, plan.getEpisodeId(), "PLAN_UPDATE"), draft, draft.settings());
+        versions.saveAndFlush(draft);
+        audit.record(clinician, "PLAN_UPDATE", "Plan", planId, plan.getPatientId(),
+                "version=" + draft.getNumber() + ",adjustments cleared");
     }
 
     // ---- Contract P: reads for the trainer workspace and other features ----
@@ -141,12 +247,16 @@ public class Plans {
     @Transactional
     public void issue(CurrentStaff clinician, UUID planId, long expectedLockVersion) {
         GradedPlan plan = access.ownedByClinic(clinician, planId, "PLAN_ISSUE");
-        PlanVersion draft = draftOf(clinician, plan, "PLAN_ISSUE");
-        if (draft.getLockVersion() != expectedLockVersion) {
-            throw new ConflictException("plan draft");
-        }
+        PlanVersion draft = lockedDraft(clinician, plan, expectedLockVersion);
         if (draft.getSteps().isEmpty()) {
             throw new InvalidStateException("plan.issue.error.noSteps");
+        }
+        EpisodeSummary episode = episode(clinician, plan.getEpisodeId(), "PLAN_ISSUE");
+        if (episode.onHold()) {
+            throw new InvalidStateException("plan.issue.error.onHold");
+        }
+        if (!pages.restsOnLatestScreening(clinician, episode, draft)) {
+            throw new InvalidStateException("plan.issue.error.staleScreening");
         }
         draft.issue(clinician.staffId(), clock.instant(), PlanFingerprint.of(draft));
         versions.saveAndFlush(draft);
@@ -157,10 +267,7 @@ public class Plans {
     @Transactional
     public void discardDraft(CurrentStaff clinician, UUID planId, long expectedLockVersion) {
         GradedPlan plan = access.ownedByClinic(clinician, planId, "PLAN_DISCARD");
-        PlanVersion draft = draftOf(clinician, plan, "PLAN_DISCARD");
-        if (draft.getLockVersion() != expectedLockVersion) {
-            throw new ConflictException("plan draft");
-        }
+        PlanVersion draft = lockedDraft(clinician, plan, expectedLockVersion);
         versions.delete(draft);
         versions.flush();
         boolean empty = versions.findFirstByClinicIdAndPlanIdOrderByNumberDesc(clinician.clinicId(), planId).isEmpty();
@@ -169,6 +276,33 @@ public class Plans {
         }
         audit.record(clinician, "PLAN_DISCARD", "Plan", planId, plan.getPatientId(),
                 "version=" + draft.getNumber() + (empty ? ",plan removed" : ""));
+    }
+
+    /** Each episode's plan at a glance, for the patient page; a plan shown is an audited read. */
+    @Transactional
+    public List<EpisodePlanSummary> summaries(CurrentStaff clinician, List<EpisodeSummary> episodes) {
+        List<EpisodePlanSummary> result = new ArrayList<>();
+        for (EpisodeSummary episode : episodes) {
+            Optional<GradedPlan> plan = plans.findByClinicIdAndEpisodeId(clinician.clinicId(), episode.id());
+            if (plan.isEmpty()) {
+                result.add(new EpisodePlanSummary(episode, null, null, null, null, 0));
+                continue;
+            }
+            GradedPlan p = plan.get();
+            Optional<PlanVersion> issued = currentIssuedVersion(p);
+            long active = sharing.sharesOf(clinician, p).stream().filter(ShareView::active).count();
+            audit.record(clinician, "PLAN_READ", "Plan", p.getId(), p.getPatientId(), "summary");
+            result.add(new EpisodePlanSummary(episode, p.getId(), issued.map(PlanVersion::getNumber).orElse(null),
+                    issued.map(PlanVersion::getIssuedAt).orElse(null),
+                    draft(p).map(PlanVersion::getNumber).orElse(null), active));
+        }
+        return result;
+    }
+
+    /** The episode of a plan of the caller's clinic (for a clinician's redirect); 404 otherwise, audited. */
+    @Transactional(readOnly = true)
+    public UUID episodeOf(CurrentStaff clinician, UUID planId) {
+        return access.ownedByClinic(clinician, planId, "PLAN_READ").getEpisodeId();
     }
 
     // ---- Sharing and invitations ----
@@ -210,8 +344,25 @@ public class Plans {
                 PlanStatus.ISSUED);
     }
 
-    private PlanVersion draftOf(CurrentStaff clinician, GradedPlan plan, String action) {
-        return versions.findFirstByClinicIdAndPlanIdAndStatusOrderByNumberDesc(clinician.clinicId(), plan.getId(),
-                PlanStatus.DRAFT).orElseThrow(() -> new InvalidStateException("plan.error.noDraft"));
+    private Optional<PlanVersion> draft(GradedPlan plan) {
+        return versions.findFirstByClinicIdAndPlanIdAndStatusOrderByNumberDesc(plan.getClinicId(), plan.getId(),
+                PlanStatus.DRAFT);
+    }
+
+    /** The plan's draft, if the form that changes it was made from its current state; else a conflict (409). */
+    private PlanVersion lockedDraft(CurrentStaff clinician, GradedPlan plan, long expectedLockVersion) {
+        PlanVersion draft = draft(plan).orElseThrow(() -> new InvalidStateException("plan.error.noDraft"));
+        if (draft.getLockVersion() != expectedLockVersion) {
+            throw new ConflictException("plan draft");
+        }
+        return draft;
+    }
+
+    private EpisodeSummary episode(CurrentStaff clinician, UUID episodeId, String action) {
+        if (!clinician.is(StaffRole.CLINICIAN)) {
+            throw access.denied(clinician, action, "Episode", episodeId, "role may not plan");
+        }
+        return patients.findEpisode(clinician, episodeId).orElseThrow(() -> access.denied(clinician, action,
+                "Episode", episodeId, "not in caller's clinic or missing"));
     }
 }

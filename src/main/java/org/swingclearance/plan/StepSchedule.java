@@ -16,6 +16,11 @@ public record StepSchedule(LocalDate startsOn, StepUnit unit, int length, int se
     }
 
     public int daysPerStep() {
+        return daysFor(unit, length, sessionsPerWeek);
+    }
+
+    /** Days one step lasts: its length in days, or its sessions spread over the planned sessions per week. */
+    public static int daysFor(StepUnit unit, int length, int sessionsPerWeek) {
         return unit == StepUnit.DAYS ? length : (length * 7 + sessionsPerWeek - 1) / sessionsPerWeek;
     }
 
