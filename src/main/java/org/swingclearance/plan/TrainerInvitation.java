@@ -1,7 +1,5 @@
 package org.swingclearance.plan;
 
-import org.hibernate.annotations.JdbcTypeCode;
-import org.hibernate.type.SqlTypes;
 import jakarta.persistence.Column;
 import jakarta.persistence.Entity;
 import jakarta.persistence.Id;
@@ -27,7 +25,6 @@ public class TrainerInvitation {
     private String email;
     private String invitedName;
     @Column(name = "token_sha256")
-    @JdbcTypeCode(SqlTypes.CHAR)
     private String tokenSha256;
     private Instant createdAt;
     private UUID createdBy;
