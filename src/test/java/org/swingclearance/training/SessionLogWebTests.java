@@ -5,6 +5,8 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.csrf;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.content;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.flash;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.model;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.view;
@@ -119,6 +121,19 @@ class SessionLogWebTests extends PostgresTestBase {
         Integer loadReads = jdbc.queryForObject("select count(*) from audit_event where clinic_id = ? and action = ?"
                 + " and patient_id = ?", Integer.class, clinic.id(), "LOAD_READ", plan.patientId());
         assertThat(loadReads).isEqualTo(1);
+    }
+
+    @Test
+    void withoutAnIssuedPlanTheClinicianSeesWhyAndCannotLog() throws Exception {
+        UUID patient = data.patient(clinic);
+        UUID episode = data.shoulderEpisode(clinic, patient);
+        mvc.perform(get("/training/episodes/{id}", episode).with(data.as(clinic.clinician())))
+                .andExpect(status().isOk()).andExpect(content().string(org.hamcrest.Matchers.containsString(
+                        "There is no issued plan for this episode yet")));
+        mvc.perform(get("/training/episodes/{id}/sessions/new", episode).with(data.as(clinic.clinician())))
+                .andExpect(status().is3xxRedirection()).andExpect(flash().attribute("flash", "training.noPlan"));
+        mvc.perform(get("/training/episodes/{id}", episode).with(data.as(clinic.trainer())))
+                .andExpect(status().isNotFound());
     }
 
     @Nested

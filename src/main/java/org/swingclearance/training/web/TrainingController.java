@@ -88,11 +88,12 @@ class TrainingController {
     String correctForm(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID episodeId,
                        @PathVariable UUID logId, Model model, RedirectAttributes redirect) {
         SessionHistory history = sessions.session(me.staff(), episodeId, logId);
-        if (history.plan() == null) {
-            return backToLog(episodeId, new InvalidStateException("training.noPlan"), redirect);
+        try {
+            model.addAttribute("form", CorrectionForm.from(history.latest()));
+            return correctionPage(history, model);
+        } catch (InvalidStateException e) {
+            return backToLog(episodeId, e, redirect);
         }
-        model.addAttribute("form", CorrectionForm.from(history.latest()));
-        return correctionPage(history, model);
     }
 
     @PostMapping("/sessions/{logId}/correct")
@@ -153,6 +154,9 @@ class TrainingController {
     }
 
     private String correctionPage(SessionHistory history, Model model) {
+        if (history.plan() == null) {
+            throw new InvalidStateException("training.noPlan");
+        }
         model.addAttribute("history", history);
         model.addAttribute("plan", history.plan());
         model.addAttribute("today", sessions.today());
