@@ -42,7 +42,9 @@
     };
 
     const render = (data) => {
-      document.getElementById('findings-rules').textContent = data.rulesLabel;
+      const rules = document.getElementById('findings-rules');
+      rules.textContent = data.rulesLabel;
+      rules.setAttribute('href', rules.getAttribute('href').replace(/\d+$/, String(data.rulesVersion)));
       data.bands.forEach((band) => {
         const target = document.getElementById('suggested-' + band.region);
         if (!target) return;

@@ -43,10 +43,6 @@ public final class Measurements {
                 : Collections.unmodifiableSet(EnumSet.copyOf(redFlags));
     }
 
-    public static Measurements none() {
-        return new Measurements(Map.of(), Set.of());
-    }
-
     /** Recorded values by key, in catalogue order; keys of untested fields are absent. */
     public Map<String, Double> values() {
         return values;

@@ -23,6 +23,7 @@ import org.swingclearance.audit.AuditLog;
 import org.swingclearance.engine.rules.LoadBand;
 import org.swingclearance.identity.CurrentStaff;
 import org.swingclearance.identity.StaffAccounts;
+import org.swingclearance.patient.EpisodeStatus;
 import org.swingclearance.patient.EpisodeSummary;
 import org.swingclearance.patient.PatientSummary;
 import org.swingclearance.patient.Patients;
@@ -72,6 +73,9 @@ public class Screenings {
     public UUID start(CurrentStaff staff, UUID episodeId) {
         EpisodeSummary episode = patients.findEpisode(staff, episodeId)
                 .orElseThrow(() -> denied(staff, "SCREENING_CREATE", "Episode", episodeId));
+        if (episode.status() == EpisodeStatus.CLOSED) {
+            throw new InvalidStateException("screening.error.episodeClosed");
+        }
         List<Screening> existing = screenings.findByClinicIdAndEpisodeIdOrderByCreatedAtAsc(staff.clinicId(), episodeId);
         for (Screening s : existing) {
             if (latestVersion(s).getStatus() == ScreeningStatus.DRAFT) {
@@ -212,7 +216,7 @@ public class Screenings {
                 content(staff, screening, measurements));
         versions.saveAndFlush(amendment);
         audit.record(staff, "SCREENING_AMEND", "Screening", screeningId, screening.getPatientId(),
-                "version=" + amendment.getVersionNo() + " supersedes=" + latest.getId() + " reason=" + reason.trim());
+                "version=" + amendment.getVersionNo() + " versionId=" + amendment.getId() + " supersedes=" + latest.getId());
         return amendment.getVersionNo();
     }
 

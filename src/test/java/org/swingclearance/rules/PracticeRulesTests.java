@@ -132,6 +132,10 @@ class PracticeRulesTests extends PostgresTestBase {
                 .andExpect(status().isOk())
                 .andExpect(content().string(Matchers.containsString("Practice rules, version 1")))
                 .andExpect(content().string(Matchers.containsString("Wilk")));
+        mvc.perform(get("/rules/edit").with(data.as(clinic.admin())))
+                .andExpect(status().isOk())
+                .andExpect(content().string(Matchers.containsString("name=\"rules[0].threshold\"")))
+                .andExpect(content().string(Matchers.containsString("name=\"changeNote\"")));
         mvc.perform(get("/rules/edit").with(data.as(clinic.clinician()))).andExpect(status().isForbidden());
         mvc.perform(get("/rules").with(data.as(clinic.trainer()))).andExpect(status().isForbidden());
 

@@ -172,6 +172,17 @@ class ScreeningWebTests extends PostgresTestBase {
                 .andExpect(view().name("screening/view"))
                 .andExpect(content().string(Matchers.containsString("Strength tested twice, stable")))
                 .andExpect(content().string(Matchers.containsString("verifies")));
+
+        // The same form sent again (a second click, another tab) changes nothing and says why.
+        String signed = jdbc.queryForObject("select v::text from screening_version v where screening_id = ?",
+                String.class, screening);
+        mvc.perform(post("/screenings/{id}", screening).with(csrf()).with(data.as(clinician))
+                        .param("lockVersion", "0").param("action", "save").param("values[PAIN_AT_REST]", "9"))
+                .andExpect(status().is3xxRedirection())
+                .andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.flash()
+                        .attribute("flash", "screening.error.signed"));
+        assertThat(jdbc.queryForObject("select v::text from screening_version v where screening_id = ?", String.class,
+                screening)).isEqualTo(signed);
     }
 
     @Test

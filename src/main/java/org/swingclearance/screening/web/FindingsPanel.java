@@ -20,12 +20,16 @@ import org.swingclearance.screening.ScreeningSnapshot;
  * display only (2 decimals, trailing zeros dropped); everything was computed by the engine.
  */
 record FindingsPanel(List<ValueRow> derived, List<FindingRow> findings, List<BandRow> bands, List<String> missing,
-                     List<ChangeRow> changes, String previous, String rulesLabel, boolean redFlagsOpen,
-                     Map<String, String> fieldErrors) {
+                     List<ChangeRow> changes, String previous, int rulesVersion, String rulesLabel,
+                     boolean redFlagsOpen, Map<String, String> fieldErrors) {
+
+    private static final java.time.format.DateTimeFormatter MINUTE = java.time.format.DateTimeFormatter
+            .ofPattern("yyyy-MM-dd HH:mm 'UTC'").withZone(java.time.ZoneOffset.UTC);
 
     /** A panel carrying only field problems (the preview of a form with unacceptable values). */
     static FindingsPanel problems(Map<String, String> fieldErrors) {
-        return new FindingsPanel(List.of(), List.of(), List.of(), List.of(), List.of(), null, null, false, fieldErrors);
+        return new FindingsPanel(List.of(), List.of(), List.of(), List.of(), List.of(), null, 0, null, false,
+                fieldErrors);
     }
 
     /** A derived value, or why it has none. */
@@ -78,9 +82,9 @@ record FindingsPanel(List<ValueRow> derived, List<FindingRow> findings, List<Ban
                 t.msg(c.importantImprovement() ? "screening.change.improved"
                         : c.importantWorsening() ? "screening.change.worse" : "screening.change.belowMcid"),
                 c.mcidSource())).toList();
-        String previous = s.previous() == null ? null
-                : t.msg("screening.change.since", String.valueOf(s.previous().versionNo()), s.previous().signedAt());
-        return new FindingsPanel(derived, findings, bands, missing, changes, previous,
+        String previous = s.previous() == null ? null : t.msg("screening.change.since",
+                String.valueOf(s.previous().versionNo()), MINUTE.format(java.time.Instant.parse(s.previous().signedAt())));
+        return new FindingsPanel(derived, findings, bands, missing, changes, previous, s.rulesVersion(),
                 t.msg("screening.findings.rulesVersion", String.valueOf(s.rulesVersion())), s.redFlagsOpen(),
                 fieldErrors);
     }

@@ -62,8 +62,14 @@ class ScreeningController {
 
     @PostMapping("/episodes/{episodeId}/screenings")
     @PreAuthorize("hasRole('CLINICIAN')")
-    String start(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID episodeId) {
-        return "redirect:/screenings/" + screenings.start(me.staff(), episodeId);
+    String start(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID episodeId,
+                 RedirectAttributes redirect) {
+        try {
+            return "redirect:/screenings/" + screenings.start(me.staff(), episodeId);
+        } catch (InvalidStateException e) {
+            redirect.addFlashAttribute("flash", e.messageKey());
+            return "redirect:/";
+        }
     }
 
     @GetMapping("/screenings/{id}")
@@ -84,13 +90,25 @@ class ScreeningController {
         return renderView(screenings.page(me.staff(), id, versionNo), model);
     }
 
-    /** The form's buttons: "calculate" (show results, save nothing), "save" (draft) or "sign". */
+    /**
+     * The form's buttons: "calculate" (show results, save nothing), "save" (draft) or "sign". A form sent for a
+     * version that was signed meanwhile (a second click, another tab) changes nothing and says so.
+     */
     @PostMapping("/screenings/{id}")
     @PreAuthorize("hasRole('CLINICIAN')")
     String submit(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID id,
                   @ModelAttribute("form") ScreeningForm form, BindingResult errors,
                   @RequestParam(defaultValue = "save") String action, Model model, RedirectAttributes redirect) {
-        CurrentStaff staff = me.staff();
+        try {
+            return handle(me.staff(), id, form, errors, action, model, redirect);
+        } catch (InvalidStateException e) {
+            redirect.addFlashAttribute("flash", e.messageKey());
+            return "redirect:/screenings/" + id;
+        }
+    }
+
+    private String handle(CurrentStaff staff, UUID id, ScreeningForm form, BindingResult errors, String action,
+                          Model model, RedirectAttributes redirect) {
         MeasurementReading reading = MeasurementReading.of(form.getValues(), form.redFlagSet());
         if (!reading.valid()) {
             reading.problems().forEach((key, p) -> errors.rejectValue(ScreeningForm.path(key), p.code(),
