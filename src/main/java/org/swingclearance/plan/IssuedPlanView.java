@@ -51,6 +51,16 @@ public record IssuedPlanView(UUID planId, int version, UUID episodeId, UUID pati
         return steps.stream().filter(s -> s.number() == step.number() + 1).findFirst();
     }
 
+    /** Days one step lasts (its length in days, or its sessions at the planned sessions per week). */
+    public int daysPerStep() {
+        return StepSchedule.daysFor(stepUnit, stepLength, sessionsPerWeek);
+    }
+
+    /** Message key of the sentence that says how long a step lasts. */
+    public String stepLengthKey() {
+        return "plan.rules.stepLength." + stepUnit.name();
+    }
+
     public boolean gateBefore(PlanStepView step) {
         return gateStep != null && gateStep == step.number();
     }

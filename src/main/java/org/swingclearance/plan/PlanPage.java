@@ -34,6 +34,11 @@ public record PlanPage(EpisodeSummary episode, PatientSummary patient, String bl
         return planId != null;
     }
 
+    /** The ways a step length can be counted, for the settings form. */
+    public List<StepUnit> stepUnits() {
+        return List.of(StepUnit.values());
+    }
+
     /** The version the page shows in full: the draft while one is open, else the current issued version. */
     public PlanVersionView shown() {
         return draft != null ? draft : issued;
