@@ -11,8 +11,8 @@ import org.springframework.context.annotation.Bean;
 
 /**
  * {@code ./mvnw spring-boot:test-run}: the application on an embedded PostgreSQL (real server binaries from a
- * Maven artifact) with the demo clinic. The data directory {@code .local-data/postgres} is kept between runs;
- * delete it to start afresh. Nothing to install but a JDK.
+ * Maven artifact) with the demo clinic. The data directory {@code .local-data/postgres} (system property
+ * {@code clearance.embedded.data-dir}) is kept between runs; delete it to start afresh. Nothing to install but a JDK.
  */
 public class TestSwingClearanceApplication {
 
@@ -30,7 +30,7 @@ public class TestSwingClearanceApplication {
         @Bean(destroyMethod = "close")
         EmbeddedPostgres embeddedPostgres() throws IOException {
             return EmbeddedPostgres.builder()
-                    .setDataDirectory(Path.of(".local-data", "postgres").toAbsolutePath())
+                    .setDataDirectory(Path.of(System.getProperty("clearance.embedded.data-dir", ".local-data/postgres")).toAbsolutePath())
                     .setCleanDataDirectory(false)
                     .setPort(Integer.parseInt(System.getProperty("clearance.embedded.port", "0")))
                     .start();

@@ -16,6 +16,13 @@ class ErrorPages {
         return "error/404";
     }
 
+    /** A malformed record id in the path names no record: answer as for a missing one. */
+    @ExceptionHandler(org.springframework.web.method.annotation.MethodArgumentTypeMismatchException.class)
+    @ResponseStatus(HttpStatus.NOT_FOUND)
+    String malformedId() {
+        return "error/404";
+    }
+
     @ExceptionHandler({ConflictException.class, ObjectOptimisticLockingFailureException.class})
     @ResponseStatus(HttpStatus.CONFLICT)
     String conflict() {

@@ -42,7 +42,7 @@ class PatientBrowserTests extends BrowserTestBase {
         browser.findElement(By.linkText("New episode")).click();
         new Select(field("region")).selectByValue("SHOULDER");
         new Select(field("shoulderSide")).selectByValue("LEFT");
-        field("injuryDate").sendKeys("15032026");
+        field("injuryDate").sendKeys("03152026");
         type("goal", "Two-hand swings again by summer");
         browser.findElement(By.cssSelector("main form button[type=submit]")).click();
         await.until(ExpectedConditions.urlMatches(".*/patients/[0-9a-f-]{36}$"));

@@ -138,7 +138,10 @@ class PatientWebTests extends PostgresTestBase {
         TestClinic other = data.clinic();
         UUID foreign = data.patient(other);
         mvc.perform(get("/patients/{id}", foreign).with(data.as(clinic.clinician())))
-                .andExpect(status().isNotFound()).andExpect(view().name("error/404"));
+                .andExpect(status().isNotFound()).andExpect(view().name("error/404"))
+                .andExpect(content().string(Matchers.containsString("This record does not exist")));
+        mvc.perform(get("/patients/not-a-record-id").with(data.as(clinic.clinician())))
+                .andExpect(status().isNotFound());
         mvc.perform(post("/patients/{id}", foreign).with(csrf()).with(data.as(clinic.clinician()))
                         .param("code", "X").param("dateOfBirth", "1980-01-01").param("sex", "MALE")
                         .param("statureCm", "170").param("bodyMassKg", "70").param("dominantHand", "LEFT")
@@ -160,7 +163,8 @@ class PatientWebTests extends PostgresTestBase {
                         .param("code", "SECOND").param("dateOfBirth", "1985-05-20").param("sex", "MALE")
                         .param("statureCm", "178").param("bodyMassKg", "81").param("dominantHand", "RIGHT")
                         .param("version", "0"))
-                .andExpect(status().isConflict()).andExpect(view().name("error/409"));
+                .andExpect(status().isConflict()).andExpect(view().name("error/409"))
+                .andExpect(content().string(Matchers.containsString("Nothing of yours was saved")));
         assertThat(jdbc.queryForObject("select code from patient where id = ?", String.class, patient)).isEqualTo("FIRST");
     }
 
