@@ -16,7 +16,7 @@ import org.springframework.transaction.support.TransactionTemplate;
  * The command-line verification: {@code java -jar swing-clearance.jar verify-audit [clinicId]} walks one chain
  * (or every chain), prints a report per chain, records the run in each chain it verified, and exits with 0 when
  * all are intact, 1 when a chain is broken, 2 on a bad argument. Without the argument it does nothing, so the
- * web application starts as usual. {@link VerifyAuditMode} keeps the web server off for this run.
+ * web application starts as usual. {@link VerifyAuditMode} keeps this run off the usual port and off the network.
  */
 @Component
 class VerifyAuditCommand implements ApplicationRunner {

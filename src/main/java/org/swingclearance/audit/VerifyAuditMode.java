@@ -8,8 +8,9 @@ import org.springframework.core.env.ConfigurableEnvironment;
 import org.springframework.core.env.MapPropertySource;
 
 /**
- * Starts the application without its web server, scheduler-free, when the command line asks for
- * {@code verify-audit}: the verification must not take the port of a running instance or start serving pages.
+ * When the command line asks for {@code verify-audit}, the application starts on a random port of the loopback
+ * interface only (the security configuration needs a web application, but the run must not take the port of a
+ * running instance nor be reachable from outside) and without the checkpoint job; it exits after the report.
  * Registered in META-INF/spring.factories.
  */
 class VerifyAuditMode implements EnvironmentPostProcessor {
@@ -19,7 +20,8 @@ class VerifyAuditMode implements EnvironmentPostProcessor {
         String words = environment.getProperty("nonOptionArgs", "");
         if (Arrays.asList(words.split(",")).contains(VerifyAuditCommand.COMMAND)) {
             environment.getPropertySources().addFirst(new MapPropertySource("verify-audit", Map.of(
-                    "spring.main.web-application-type", "none",
+                    "server.port", "0",
+                    "server.address", "127.0.0.1",
                     "clearance.audit.checkpoint-cron", "-")));
         }
     }
