@@ -3,11 +3,7 @@ package org.swingclearance.audit;
 import java.io.OutputStream;
 import java.time.Clock;
 import java.time.Instant;
-import java.time.LocalDate;
 import java.time.YearMonth;
-import java.time.ZoneOffset;
-import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -42,6 +38,7 @@ public class AuditOversight {
     private final AuditCheckpoints checkpoints;
     private final AuditEventQueries events;
     private final AuditReportQueries reports;
+    private final MonthlyActivitySummaries summaries;
     private final ClinicRepository clinics;
     private final AuditSettings settings;
     private final CheckpointSigner signer;
@@ -50,13 +47,14 @@ public class AuditOversight {
     private final TransactionTemplate tx;
 
     AuditOversight(AuditLog audit, AuditVerifier verifier, AuditCheckpoints checkpoints, AuditEventQueries events,
-                   AuditReportQueries reports, ClinicRepository clinics, AuditSettings settings,
+                   AuditReportQueries reports, MonthlyActivitySummaries summaries, ClinicRepository clinics, AuditSettings settings,
                    CheckpointSigner signer, JdbcTemplate jdbc, Clock clock, PlatformTransactionManager transactions) {
         this.audit = audit;
         this.verifier = verifier;
         this.checkpoints = checkpoints;
         this.events = events;
         this.reports = reports;
+        this.summaries = summaries;
         this.clinics = clinics;
         this.settings = settings;
         this.signer = signer;
@@ -89,16 +87,8 @@ public class AuditOversight {
     @Transactional
     public Overview overview(CurrentStaff manager) {
         audit.record(manager, AuditActions.AUDIT_VIEW, "AuditTrail", manager.clinicId(), null, "page=overview");
-        YearMonth first = YearMonth.now(clock).minusMonths(11);
-        Instant from = first.atDay(1).atStartOfDay(ZoneOffset.UTC).toInstant();
-        Instant until = LocalDate.now(clock).plusDays(1).atStartOfDay(ZoneOffset.UTC).toInstant();
-        Map<String, MonthlyActivity> found = new HashMap<>();
-        events.monthlyActivity(manager.clinicId(), from, until).forEach(m -> found.put(m.month(), m));
-        List<MonthlyActivity> twelve = new ArrayList<>();
-        for (int i = 0; i < 12; i++) {
-            String month = first.plusMonths(i).toString();
-            twelve.add(found.getOrDefault(month, new MonthlyActivity(month, 0, 0, 0, 0)));
-        }
+        YearMonth last = YearMonth.now(clock);
+        List<MonthlyActivity> twelve = summaries.months(manager.clinicId(), last.minusMonths(11), last);
         return new Overview(status(manager), checkpoints.latest(manager.clinicId(), 10), twelve);
     }
 
