@@ -21,7 +21,6 @@ import org.swingclearance.engine.load.WindowStatus;
 import org.swingclearance.engine.rules.Comparison;
 import org.swingclearance.engine.rules.LoadBand;
 import org.swingclearance.engine.rules.MissingValue;
-import org.swingclearance.engine.rules.RedFlag;
 import org.swingclearance.engine.rules.Region;
 import org.swingclearance.engine.rules.RegionBand;
 import org.swingclearance.engine.scoring.Grip;
@@ -47,10 +46,10 @@ class EngineMessagesTests {
         List<Class<? extends Enum<?>>> top = List.of(EvidenceTag.class, Confidence.class, Side.class, Sex.class,
                 Region.class, LoadBand.class, Comparison.class, RotationBasis.class, OdiBand.class, Instrument.class,
                 Measure.class, ValueKey.class, DayStatus.class, RatioStatus.class, WindowStatus.class,
-                SdConvention.class, ConfigurationMatch.class, RedFlag.class);
+                SdConvention.class, ConfigurationMatch.class);
         List<Class<? extends Enum<?>>> nested = List.of(RegionBand.Basis.class, MissingValue.Need.class,
                 NotScorable.Reason.class, Spadi.TotalMethod.class, Grip.Protocol.class, PainDecision.Decision.class,
-                PainReason.Kind.class, Alert.Kind.class, RedFlag.Urgency.class);
+                PainReason.Kind.class, Alert.Kind.class);
         List<String> missing = new ArrayList<>();
         for (Class<? extends Enum<?>> type : top) {
             collectMissing(messages, type.getSimpleName(), type, missing);

@@ -136,19 +136,6 @@ class BandingTests {
     }
 
     @Test
-    void redFlagUrgency() {
-        // Finucane 2020 [V,H] / clinical.md §0 row 5 and §5.2: CES flag -> EMERGENCY
-        assertThat(RedFlag.LUMBAR_CAUDA_EQUINA.urgency()).isEqualTo(RedFlag.Urgency.EMERGENCY);
-        assertThat(RedFlags.mostUrgent(List.of(RedFlag.LUMBAR_FRACTURE, RedFlag.LUMBAR_CAUDA_EQUINA)))
-                .contains(RedFlag.Urgency.EMERGENCY);
-        // BESS/BOA pathways [S,H] / clinical.md §5.1: acute cuff tear -> urgent specialist review
-        assertThat(RedFlags.mostUrgent(List.of(RedFlag.SHOULDER_ACUTE_CUFF_TEAR))).contains(RedFlag.Urgency.URGENT);
-        assertThat(RedFlags.mostUrgent(List.of())).isEmpty();
-        assertThat(RedFlags.forceHold(List.of(RedFlag.SHOULDER_MALIGNANCY))).isTrue();
-        assertThat(RedFlags.forceHold(List.of())).isFalse();
-    }
-
-    @Test
     void requiredValuesAndValuesNeededByFiredRulesBlockSigning() {
         BandingResult result = Banding.evaluate(DEFAULTS, Map.of(ValueKey.GIRD, 25.0,
                 ValueKey.PAIN_DURING_MOVEMENT, 3.0, ValueKey.QUICKDASH_SCORE, 10.0), false);
