@@ -11,6 +11,11 @@ public final class AuditActions {
     public static final String SCREENING_CREATE = "SCREENING_CREATE";
     /** A screening version was signed: object Screening/id, patient, detail {@code episode}, {@code version}. */
     public static final String SCREENING_SIGN = "SCREENING_SIGN";
+    /**
+     * A signed screening was reopened as a new draft version for a correction: object Screening/id, patient,
+     * detail {@code version}. Until a later SCREENING_SIGN the draft counts as open.
+     */
+    public static final String SCREENING_AMEND = "SCREENING_AMEND";
     /** A draft screening was discarded unsigned: object Screening/id, patient. */
     public static final String SCREENING_DISCARD = "SCREENING_DISCARD";
     /**

@@ -137,7 +137,10 @@ class AuditReportQueries {
                 "audit.col.issuedBy"), rows, p);
     }
 
-    /** Drafts started more than {@code staleDays} days before today and never signed nor discarded. */
+    /**
+     * Drafts (a new screening or an amendment of a signed one) opened more than {@code staleDays} days before today
+     * and not signed nor discarded since.
+     */
     private Report staleDrafts(UUID clinicId, ReportParams p) {
         Instant before = p.today().minusDays(p.staleDays()).atStartOfDay(ZoneOffset.UTC).toInstant();
         List<List<String>> rows = jdbc.query("""
@@ -146,11 +149,11 @@ class AuditReportQueries {
                 from audit_event c
                 left join staff_account s on s.id = c.actor_id and s.clinic_id = c.clinic_id
                 left join patient pt on pt.id = c.patient_id and pt.clinic_id = c.clinic_id
-                where c.clinic_id = ? and c.action = ? and c.outcome = 'SUCCESS' and c.occurred_at < ?
+                where c.clinic_id = ? and c.action in (?, ?) and c.outcome = 'SUCCESS' and c.occurred_at < ?
                   and not exists (
                       select 1 from audit_event d
                       where d.clinic_id = c.clinic_id and d.object_type = c.object_type and d.object_id = c.object_id
-                        and d.action in (?, ?) and d.outcome = 'SUCCESS')
+                        and d.action in (?, ?) and d.outcome = 'SUCCESS' and (d.occurred_at, d.seq) > (c.occurred_at, c.seq))
                 order by c.occurred_at, c.seq""",
                 (rs, n) -> {
                     Instant started = AuditEventQueries.instant(rs, 1);
@@ -158,7 +161,8 @@ class AuditReportQueries {
                     return List.of(time(started), nz(rs.getString(2)), nz(rs.getString(3)), nz(rs.getString(4)),
                             Long.toString(days));
                 },
-                clinicId, AuditActions.SCREENING_CREATE, Timestamp.from(before), AuditActions.SCREENING_SIGN,
+                clinicId, AuditActions.SCREENING_CREATE, AuditActions.SCREENING_AMEND, Timestamp.from(before),
+                AuditActions.SCREENING_SIGN,
                 AuditActions.SCREENING_DISCARD);
         return new Report(ReportKind.STALE_DRAFTS, List.of("audit.col.startedAt", "audit.col.clinician",
                 "audit.col.patient", "audit.col.screening", "audit.col.daysOpen"), rows, p);

@@ -147,7 +147,10 @@ class AuditReportTests extends PostgresTestBase {
         });
     }
 
-    /** Drafts older than 14 days and never signed nor discarded; a younger draft and finished ones do not count. */
+    /**
+     * Drafts older than 14 days and not signed nor discarded since; a younger draft and finished ones do not
+     * count, a correction left open does.
+     */
     @Test
     void staleDraftsAreOldUnfinishedScreenings() throws Exception {
         UUID stale = UUID.randomUUID();
@@ -159,11 +162,17 @@ class AuditReportTests extends PostgresTestBase {
         on(today.minusDays(20), clinic.clinician(), AuditActions.SCREENING_CREATE, "Screening", discarded, null);
         on(today.minusDays(19), clinic.clinician(), AuditActions.SCREENING_DISCARD, "Screening", discarded, null);
         on(today.minusDays(3), clinic.clinician(), AuditActions.SCREENING_CREATE, "Screening", UUID.randomUUID(), null);
+        // Signed, then reopened for a correction 16 days ago and left open: the amendment is an open draft.
+        UUID amended = UUID.randomUUID();
+        on(today.minusDays(30), clinic.clinician(), AuditActions.SCREENING_CREATE, "Screening", amended, null);
+        on(today.minusDays(29), clinic.clinician(), AuditActions.SCREENING_SIGN, "Screening", amended, null);
+        on(today.minusDays(16), clinic.clinician(), AuditActions.SCREENING_AMEND, "Screening", amended, null);
 
-        assertThat(report("stale-drafts").rows()).singleElement()
-                .satisfies(row -> assertThat(row.subList(1, 5)).containsExactly(clinic.clinician().displayName(),
-                        patientCode, stale.toString(), "20"));
-        assertThat(report("stale-drafts", "days", "2").rows()).hasSize(2);
+        assertThat(report("stale-drafts").rows()).hasSize(2).satisfiesExactly(
+                row -> assertThat(row.subList(1, 5)).containsExactly(clinic.clinician().displayName(), patientCode,
+                        stale.toString(), "20"),
+                row -> assertThat(row.subList(3, 5)).containsExactly(amended.toString(), "16"));
+        assertThat(report("stale-drafts", "days", "2").rows()).hasSize(3);
         assertThat(report("stale-drafts", "days", "30").rows()).isEmpty();
     }
 

@@ -33,6 +33,7 @@ import org.springframework.web.servlet.mvc.method.RequestMappingInfo;
 import org.springframework.web.servlet.mvc.method.annotation.RequestMappingHandlerMapping;
 import org.swingclearance.identity.CurrentStaff;
 import org.swingclearance.identity.StaffRole;
+import org.swingclearance.screening.Screenings;
 import org.swingclearance.support.IntegrationTest;
 import org.swingclearance.support.PostgresTestBase;
 import org.swingclearance.support.TestData;
@@ -75,26 +76,34 @@ class PatientDataAuditSweepTests extends PostgresTestBase {
     @Qualifier("requestMappingHandlerMapping")
     RequestMappingHandlerMapping mapping;
 
+    @Autowired
+    Screenings screenings;
+
     TestClinic clinic;
     UUID patient;
     UUID episode;
+    UUID screening;
 
     /**
      * A real record for each path variable, keyed by "variable" or, for a bare {id}, by "prefix:id". Features
-     * that add pages add their records here (a screening, a plan, a shared plan for a trainer...).
+     * that add pages add their records here (a plan, a shared plan for a trainer, a session...).
      */
-    Map<String, Function<TestClinic, UUID>> fixtures;
+    Map<String, Function<TestClinic, Object>> fixtures;
 
     @BeforeAll
     void records() {
         clinic = data.clinic();
         patient = data.patient(clinic);
         episode = data.shoulderEpisode(clinic, patient);
+        screening = screenings.start(clinic.clinician(), episode);
         fixtures = Map.of(
                 "/patients:id", c -> patient,
                 "patientId", c -> patient,
                 "/episodes:id", c -> episode,
-                "episodeId", c -> episode);
+                "episodeId", c -> episode,
+                "/screenings:id", c -> screening,
+                "screeningId", c -> screening,
+                "versionNo", c -> 1);
     }
 
     @TestFactory
@@ -107,7 +116,7 @@ class PatientDataAuditSweepTests extends PostgresTestBase {
     @Test
     void theSweepFindsThePatientPages() {
         assertThat(patientDataPages().keySet()).contains("/patients/{id}", "/patients/{id}/edit",
-                "/audit/patients/{patientId}");
+                "/screenings/{id}", "/audit/patients/{patientId}");
     }
 
     private void callAndExpectAudit(String path, HandlerMethod handler) throws Exception {
@@ -118,7 +127,7 @@ class PatientDataAuditSweepTests extends PostgresTestBase {
         Matcher variables = VARIABLE.matcher(path);
         while (variables.find()) {
             String name = variables.group(1);
-            Function<TestClinic, UUID> fixture = fixtures.get(name);
+            Function<TestClinic, Object> fixture = fixtures.get(name);
             if (fixture == null) {
                 fixture = fixtures.get(prefixOf(path) + ":" + name);
             }
