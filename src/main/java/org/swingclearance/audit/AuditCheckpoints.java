@@ -37,7 +37,7 @@ public class AuditCheckpoints {
         this.clock = clock;
         if (settings.usesDevelopmentKey()) {
             LOG.warn("Audit checkpoints are signed with the development key: set clearance.audit.checkpoint-key "
-                    + "(environment variable AUDIT_CHECKPOINT_KEY) to a secret of this installation");
+                    + "(environment variable CLEARANCE_AUDIT_CHECKPOINT_KEY) to a secret of this installation");
         }
     }
 
