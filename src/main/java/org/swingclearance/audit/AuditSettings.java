@@ -6,7 +6,7 @@ import org.springframework.boot.context.properties.ConfigurationProperties;
  * Configuration of the audit trail ({@code clearance.audit.*}).
  *
  * @param checkpointKey secret for the checkpoints' HMAC-SHA256; the shipped default is for development only and
- *                      every installation must set its own (environment variable AUDIT_CHECKPOINT_KEY)
+ *                      every installation must set its own (environment variable CLEARANCE_AUDIT_CHECKPOINT_KEY)
  * @param checkpointCron when the daily checkpoint job runs (UTC); "-" switches it off
  * @param pageSize rows per page of the audit browser
  */
