@@ -16,11 +16,8 @@ public record EventRow(long seq, UUID eventId, Instant occurredAt, UUID actorId,
         return new LogCursor(occurredAt, seq);
     }
 
-    /** The actor as shown: the account's current name, else the name recorded at the time, else "system". */
+    /** The actor as shown: the account's current name, else the name recorded at the time; null for the system. */
     public String actorLabel() {
-        if (actorDisplay != null) {
-            return actorDisplay;
-        }
-        return actorName == null ? "system" : actorName;
+        return actorDisplay != null ? actorDisplay : actorName;
     }
 }
