@@ -51,7 +51,8 @@ public final class AuditHashing {
         return HexFormat.of().formatHex(bytes);
     }
 
-    private static long micros(Instant t) {
+    /** A time as integer microseconds since the epoch, independent of any session time zone or date style. */
+    public static long micros(Instant t) {
         return Math.addExact(Math.multiplyExact(t.getEpochSecond(), 1_000_000L), t.getNano() / 1_000);
     }
 

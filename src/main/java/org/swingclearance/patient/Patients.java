@@ -93,10 +93,15 @@ public class Patients {
         return new PatientPage(patient.summary(), eps, cons, refs);
     }
 
-    /** Refuses (404, audited) unless the patient belongs to the caller's clinic; for forms that fail validation. */
-    @Transactional(readOnly = true)
+    /**
+     * Refuses (404, audited) unless the patient belongs to the caller's clinic; for forms that show the patient.
+     * Showing the patient's code and name is a read of the record, so it is audited as one.
+     */
+    @Transactional
     public PatientSummary requireOwn(CurrentStaff staff, UUID patientId, String action) {
-        return load(staff, patientId, action).summary();
+        PatientSummary summary = load(staff, patientId, action).summary();
+        audit.record(staff, "PATIENT_READ", "Patient", patientId, patientId, "for=" + action);
+        return summary;
     }
 
     /** A patient of the caller's clinic for another feature; does not audit (the caller audits its own read). */

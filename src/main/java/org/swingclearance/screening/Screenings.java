@@ -19,6 +19,7 @@ import java.util.Set;
 import java.util.UUID;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
+import org.swingclearance.audit.AuditDetail;
 import org.swingclearance.audit.AuditLog;
 import org.swingclearance.engine.rules.LoadBand;
 import org.swingclearance.identity.CurrentStaff;
@@ -182,14 +183,15 @@ public class Screenings {
         versions.saveAndFlush(draft);
         patients.recordRedFlags(staff, screening.getEpisodeId(), RedFlagContext.SCREENING, measurements.redFlags());
         audit.record(staff, "SCREENING_SIGN", "Screening", screeningId, screening.getPatientId(),
-                "version=" + draft.getVersionNo() + " versionId=" + draft.getId() + " rules=v" + ctx.rules().version());
+                AuditDetail.of("episode", screening.getEpisodeId(), "version", draft.getVersionNo(),
+                        "versionId", draft.getId(), "rules", "v" + ctx.rules().version()));
         if (shoulderReason != null) {
             audit.record(staff, "BAND_OVERRIDE", "Screening", screeningId, screening.getPatientId(),
-                    "versionId=" + draft.getId() + " region=SHOULDER reason=" + shoulderReason);
+                    AuditDetail.of("versionId", draft.getId(), "region", "SHOULDER", "reason", shoulderReason));
         }
         if (lumbopelvicReason != null) {
             audit.record(staff, "BAND_OVERRIDE", "Screening", screeningId, screening.getPatientId(),
-                    "versionId=" + draft.getId() + " region=LUMBOPELVIC reason=" + lumbopelvicReason);
+                    AuditDetail.of("versionId", draft.getId(), "region", "LUMBOPELVIC", "reason", lumbopelvicReason));
         }
     }
 
@@ -216,7 +218,8 @@ public class Screenings {
                 content(staff, screening, measurements));
         versions.saveAndFlush(amendment);
         audit.record(staff, "SCREENING_AMEND", "Screening", screeningId, screening.getPatientId(),
-                "version=" + amendment.getVersionNo() + " versionId=" + amendment.getId() + " supersedes=" + latest.getId());
+                AuditDetail.of("version", amendment.getVersionNo(), "versionId", amendment.getId(), "supersedes",
+                        latest.getId()));
         return amendment.getVersionNo();
     }
 

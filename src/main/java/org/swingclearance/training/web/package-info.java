@@ -1,0 +1,2 @@
+/** Pages of the trainer workspace: session log and correction forms, load charts, alert acknowledgement. */
+package org.swingclearance.training.web;

@@ -1,0 +1,151 @@
+package org.swingclearance.plan;
+
+import java.time.LocalDate;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.UUID;
+import org.swingclearance.equipment.ClubDetails;
+import org.swingclearance.equipment.Clubs;
+import org.swingclearance.equipment.InertiaMethod;
+import org.swingclearance.identity.CurrentStaff;
+import org.swingclearance.patient.Patients;
+import org.swingclearance.screening.Decision;
+import org.swingclearance.screening.MeasurementReading;
+import org.swingclearance.screening.Screenings;
+import org.swingclearance.support.TestData;
+import org.swingclearance.support.TestData.TestClinic;
+
+/**
+ * Test data for plan tests, built through the real services: a clinic with its staff, three clubs of the CASE-M80
+ * shape (biomechanics.md §0.1: 0.60 m, balance point 0.45 m, head centre 0.50 m) at 4.0, 4.3 and 4.6 kg (close
+ * enough that a change of club stays within the +10 % step limit), a patient of
+ * the CASE-M80 body with a right-shoulder episode and a signed screening (Contract S, through the screening
+ * service), and settings for the built-in one-hand front arc.
+ */
+final class PlanScenario {
+
+    /** Built-in "two-hand front pendulum, low" (V31): centre 0°, half-arc 45°, two hands, rhythmic, not hip-driven. */
+    static final UUID TWO_HAND_LOW_PENDULUM = UUID.fromString("00000000-0000-4000-8000-00000000a002");
+
+    /** The screening's band decisions carry these reasons: clinical text a trainer must never see. */
+    static final String SHOULDER_OVERRIDE_REASON = "Tolerates two-hand carries at this level";
+    static final String LUMBOPELVIC_OVERRIDE_REASON = "No lumbar symptoms during the last month of training";
+
+    final TestClinic clinic;
+    final UUID patientId;
+    final UUID episodeId;
+    final List<UUID> clubs;
+
+    private PlanScenario(TestClinic clinic, UUID patientId, UUID episodeId, List<UUID> clubs) {
+        this.clinic = clinic;
+        this.patientId = patientId;
+        this.episodeId = episodeId;
+        this.clubs = clubs;
+    }
+
+    /** A fresh clinic, inventory, patient and episode with a signed screening. */
+    static PlanScenario create(TestData data, Clubs clubService, Screenings screenings) {
+        TestClinic clinic = data.clinic();
+        CurrentStaff clinician = clinic.clinician();
+        List<UUID> inventory = List.of(
+                clubService.create(clinician, club("Club 4.0 kg", 4.0)),
+                clubService.create(clinician, club("Club 4.3 kg", 4.3)),
+                clubService.create(clinician, club("Club 4.6 kg", 4.6)));
+        UUID patient = data.patient(clinic);
+        UUID episode = data.shoulderEpisode(clinic, patient);
+        signScreening(screenings, clinician, episode);
+        return new PlanScenario(clinic, patient, episode, inventory);
+    }
+
+    CurrentStaff clinician() {
+        return clinic.clinician();
+    }
+
+    CurrentStaff trainer() {
+        return clinic.trainer();
+    }
+
+    /** Settings like the page's defaults: no target, 3 sessions per step at 3 a week, Band 2 dose 3 × 10 @ 4. */
+    PlanSettings settings(PlanDrafting drafting) {
+        return drafting.defaults(clinician(), TWO_HAND_LOW_PENDULUM, LocalDate.now().minusDays(8));
+    }
+
+    /** The patient's consent to share with the clinic's trainer, recorded by e-mail. */
+    UUID consentForTrainer(Patients patients) {
+        return patients.recordConsent(clinician(), patientId, trainer().displayName(), trainer().email(),
+                LocalDate.now());
+    }
+
+    /**
+     * Signs a complete right-shoulder screening through the screening service, Band 2 for both regions. Values as in
+     * the screening feature's worked examples (clinical.md), except a stronger shoulder: flexion force 320 / 300 N
+     * at a 0.30 m lever arm, so 96 / 90 N·m (the weaker, right side, counts for two-hand patterns).
+     */
+    static void signScreening(Screenings screenings, CurrentStaff clinician, UUID episodeId) {
+        UUID id = screenings.start(clinician, episodeId);
+        screenings.saveDraft(clinician, id, screenings.page(clinician, id).shown().lockVersion(),
+                MeasurementReading.of(typedScreening(), Set.of()).measurements());
+        screenings.sign(clinician, id, screenings.page(clinician, id).shown().lockVersion(),
+                new Decision("BAND_2", SHOULDER_OVERRIDE_REASON, "BAND_2", LUMBOPELVIC_OVERRIDE_REASON));
+    }
+
+    static Map<String, String> typedScreening() {
+        Map<String, String> v = new LinkedHashMap<>();
+        v.put("PAIN_AT_REST", "1");
+        v.put("PAIN_DURING_MOVEMENT", "2");
+        v.put("PAIN_WORST_24H", "3");
+        sides(v, "SHOULDER_FLEXION_ACTIVE", "170", "160");
+        sides(v, "SHOULDER_ABDUCTION_ACTIVE", "175", "170");
+        sides(v, "SHOULDER_EXTENSION_ACTIVE", "55", "50");
+        sides(v, "SHOULDER_ER_90_ACTIVE", "92", "100");
+        sides(v, "SHOULDER_IR_90_ACTIVE", "66", "60");
+        sides(v, "SHOULDER_ER_90_PASSIVE", "95", "105");
+        sides(v, "SHOULDER_IR_90_PASSIVE", "70", "65");
+        sides(v, "SHOULDER_FLEXION_FORCE", "320", "300");
+        sides(v, "SHOULDER_FLEXION_LEVER_ARM", "0.30", "0.30");
+        sides(v, "SHOULDER_ER_FORCE", "155", "150");
+        sides(v, "SHOULDER_ER_LEVER_ARM", "0.25", "0.25");
+        sides(v, "SHOULDER_IR_FORCE", "195", "190");
+        sides(v, "SHOULDER_IR_LEVER_ARM", "0.25", "0.25");
+        sides(v, "GRIP_TRIAL_1", "42", "40");
+        sides(v, "GRIP_TRIAL_2", "44", "41");
+        sides(v, "GRIP_TRIAL_3", "43", "40");
+        v.put("CKCUEST_TRIAL_1", "22");
+        v.put("CKCUEST_TRIAL_2", "24");
+        v.put("CKCUEST_TRIAL_3", "23");
+        v.put("SCHOBER_INCREASE", "5.0");
+        sides(v, "HIP_IR", "35", "33");
+        sides(v, "HIP_ER", "40", "42");
+        sides(v, "STRAIGHT_LEG_RAISE", "80", "85");
+        v.put("TRUNK_FLEXOR_HOLD", "120");
+        v.put("TRUNK_EXTENSOR_HOLD", "150");
+        sides(v, "SIDE_BRIDGE_HOLD", "90", "85");
+        sides(v, "ASLR", "0", "0");
+        v.put("PIT_PAIN_POSITION_1", "0");
+        v.put("PIT_EASED_POSITION_2", "0");
+        v.put("ABERRANT_LUMBAR_FLEXION", "0");
+        sides(v, "SINGLE_LEG_STANCE", "30", "28");
+        items(v, "QUICKDASH", 2, 1, 2, 1, 2, 1, 1, 2, 1, 1, 1);
+        items(v, "ODI", 1, 0, 1, 0, 0, 1, 0, 0, 0, 1);
+        items(v, "SPADI", 3, 2, 3, 1, 4, 2, 2, 1, 3, 1, 3, 1, 0);
+        items(v, "TSK_11", 2, 2, 2, 2, 2, 2, 1, 2, 2, 2, 2);
+        return v;
+    }
+
+    private static void sides(Map<String, String> v, String measurement, String left, String right) {
+        v.put(measurement + "_LEFT", left);
+        v.put(measurement + "_RIGHT", right);
+    }
+
+    private static void items(Map<String, String> v, String questionnaire, int... responses) {
+        for (int i = 0; i < responses.length; i++) {
+            v.put(questionnaire + "_" + (i + 1), String.valueOf(responses[i]));
+        }
+    }
+
+    private static ClubDetails club(String name, double massKg) {
+        return new ClubDetails(name, massKg, 0.60, 0.45, 0.20, 0.50, InertiaMethod.HEAD_MODEL, null);
+    }
+}
