@@ -31,16 +31,16 @@ REVOKE UPDATE, DELETE, TRUNCATE ON audit_event, audit_checkpoint FROM CURRENT_US
 REVOKE DELETE, TRUNCATE ON audit_chain FROM PUBLIC;
 REVOKE DELETE, TRUNCATE ON audit_chain FROM CURRENT_USER;
 
--- A NOLOGIN group role with exactly the audit rights a separate runtime login role needs (docs/audit.md,
+-- A NOLOGIN group role with exactly the audit rights a separate runtime login role needs (DEVELOPERS.md "The audit trail",
 -- "Database roles"). Creating roles needs CREATEROLE, which the migration role usually lacks; then a DBA runs
--- docs/audit/runtime-role.sql once and this block only grants to the role that now exists.
+-- db/admin/audit-runtime-role.sql once and this block only grants to the role that now exists.
 DO $$
 BEGIN
     IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = 'clearance_audit_append') THEN
         IF EXISTS (SELECT 1 FROM pg_roles WHERE rolname = current_user AND (rolsuper OR rolcreaterole)) THEN
             CREATE ROLE clearance_audit_append NOLOGIN;
         ELSE
-            RAISE NOTICE 'role clearance_audit_append not created (no CREATEROLE); see docs/audit/runtime-role.sql';
+            RAISE NOTICE 'role clearance_audit_append not created (no CREATEROLE); see db/admin/audit-runtime-role.sql';
             RETURN;
         END IF;
     END IF;

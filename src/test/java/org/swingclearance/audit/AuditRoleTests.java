@@ -97,10 +97,10 @@ class AuditRoleTests extends PostgresTestBase {
         }
     }
 
-    /** The DBA script of docs/audit: its NOLOGIN role may read and append, and is refused any change. */
+    /** The DBA script shipped in db/admin: its NOLOGIN role may read and append, and is refused any change. */
     @Test
     void theRuntimeGroupRoleMayOnlyReadAndAppend() throws Exception {
-        String script = Files.readString(Path.of("docs", "audit", "runtime-role.sql"));
+        String script = Files.readString(Path.of("src", "main", "resources", "db", "admin", "audit-runtime-role.sql"));
         try (Superuser su = Superuser.connect(env); Statement st = su.connection().createStatement()) {
             st.execute(script);
             su.connection().setAutoCommit(false);
