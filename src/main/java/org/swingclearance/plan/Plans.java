@@ -64,12 +64,19 @@ public class Plans {
 
     // ---- The clinician's plan page and drafting ----
 
-    /** The plan page of an episode of the caller's clinic; a read of the plan (when there is one) is audited. */
+    /**
+     * The plan page of an episode of the caller's clinic, audited on every render: as a read of the plan, or, before
+     * there is one, of the episode (the page still shows the patient and the screening's state).
+     */
     @Transactional
     public PlanPage page(CurrentStaff clinician, UUID episodeId) {
         EpisodeSummary episode = episode(clinician, episodeId, "PLAN_READ");
         Optional<GradedPlan> plan = plans.findByClinicIdAndEpisodeId(clinician.clinicId(), episodeId);
-        plan.ifPresent(p -> audit.record(clinician, "PLAN_READ", "Plan", p.getId(), p.getPatientId(), "view=page"));
+        if (plan.isPresent()) {
+            audit.record(clinician, "PLAN_READ", "Plan", plan.get().getId(), episode.patientId(), "view=page");
+        } else {
+            audit.record(clinician, "PLAN_READ", "Episode", episodeId, episode.patientId(), "view=page,plan=none");
+        }
         return pages.page(clinician, episode, plan.orElse(null));
     }
 

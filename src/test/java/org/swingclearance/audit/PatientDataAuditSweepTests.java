@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.fail;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 
 import java.lang.reflect.Method;
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -31,9 +32,16 @@ import org.springframework.web.bind.annotation.RequestMethod;
 import org.springframework.web.method.HandlerMethod;
 import org.springframework.web.servlet.mvc.method.RequestMappingInfo;
 import org.springframework.web.servlet.mvc.method.annotation.RequestMappingHandlerMapping;
+import org.swingclearance.equipment.Clubs;
 import org.swingclearance.identity.CurrentStaff;
 import org.swingclearance.identity.StaffRole;
+import org.swingclearance.patient.Patients;
+import org.swingclearance.plan.PlanScenario;
+import org.swingclearance.plan.Plans;
 import org.swingclearance.screening.Screenings;
+import org.swingclearance.training.SessionEntry;
+import org.swingclearance.training.SessionLogs;
+import org.swingclearance.training.TrainingPlan;
 import org.swingclearance.support.IntegrationTest;
 import org.swingclearance.support.PostgresTestBase;
 import org.swingclearance.support.TestData;
@@ -78,11 +86,21 @@ class PatientDataAuditSweepTests extends PostgresTestBase {
 
     @Autowired
     Screenings screenings;
+    @Autowired
+    Clubs clubs;
+    @Autowired
+    Plans plans;
+    @Autowired
+    Patients patients;
+    @Autowired
+    SessionLogs sessionLogs;
 
     TestClinic clinic;
     UUID patient;
     UUID episode;
     UUID screening;
+    UUID plan;
+    UUID sessionLog;
 
     /**
      * A real record for each path variable, keyed by "variable" or, for a bare {id}, by "prefix:id". Features
@@ -90,11 +108,23 @@ class PatientDataAuditSweepTests extends PostgresTestBase {
      */
     Map<String, Function<TestClinic, Object>> fixtures;
 
+    /**
+     * One patient's episode carrying every record a page can show, so that every page has something to read: clubs
+     * and a signed screening (the envelope), an issued plan shared with the clinic's trainer (the trainer's plan
+     * pages and the training log), a logged session, and a screening in draft.
+     */
     @BeforeAll
     void records() {
-        clinic = data.clinic();
-        patient = data.patient(clinic);
-        episode = data.shoulderEpisode(clinic, patient);
+        PlanScenario scenario = PlanScenario.create(data, clubs, screenings);
+        clinic = scenario.clinic();
+        patient = scenario.patientId();
+        episode = scenario.episodeId();
+        plan = scenario.issuedAndSharedPlan(plans, patients);
+        CurrentStaff trainer = clinic.trainer();
+        LocalDate today = sessionLogs.today();
+        TrainingPlan training = sessionLogs.planForLogging(trainer, episode);
+        sessionLog = sessionLogs.log(trainer, episode,
+                new SessionEntry(today, training.currentStepOn(today).number(), true, null, 30, 4, 1, 2, null));
         screening = screenings.start(clinic.clinician(), episode);
         fixtures = Map.of(
                 "/patients:id", c -> patient,
@@ -103,7 +133,9 @@ class PatientDataAuditSweepTests extends PostgresTestBase {
                 "episodeId", c -> episode,
                 "/screenings:id", c -> screening,
                 "screeningId", c -> screening,
-                "versionNo", c -> 1);
+                "versionNo", c -> 1,
+                "planId", c -> plan,
+                "logId", c -> sessionLog);
     }
 
     @TestFactory

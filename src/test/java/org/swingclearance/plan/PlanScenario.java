@@ -22,9 +22,10 @@ import org.swingclearance.support.TestData.TestClinic;
  * shape (biomechanics.md §0.1: 0.60 m, balance point 0.45 m, head centre 0.50 m) at 4.0, 4.3 and 4.6 kg (close
  * enough that a change of club stays within the +10 % step limit), a patient of
  * the CASE-M80 body with a right-shoulder episode and a signed screening (Contract S, through the screening
- * service), and settings for the built-in one-hand front arc.
+ * service), and settings for the built-in one-hand front arc. Public for other features' tests that need a real
+ * issued and shared plan (the audit sweep).
  */
-final class PlanScenario {
+public final class PlanScenario {
 
     /** Built-in "two-hand front pendulum, low" (V31): centre 0°, half-arc 45°, two hands, rhythmic, not hip-driven. */
     static final UUID TWO_HAND_LOW_PENDULUM = UUID.fromString("00000000-0000-4000-8000-00000000a002");
@@ -46,7 +47,7 @@ final class PlanScenario {
     }
 
     /** A fresh clinic, inventory, patient and episode with a signed screening. */
-    static PlanScenario create(TestData data, Clubs clubService, Screenings screenings) {
+    public static PlanScenario create(TestData data, Clubs clubService, Screenings screenings) {
         TestClinic clinic = data.clinic();
         CurrentStaff clinician = clinic.clinician();
         List<UUID> inventory = List.of(
@@ -57,6 +58,18 @@ final class PlanScenario {
         UUID episode = data.shoulderEpisode(clinic, patient);
         signScreening(screenings, clinician, episode);
         return new PlanScenario(clinic, patient, episode, inventory);
+    }
+
+    public TestClinic clinic() {
+        return clinic;
+    }
+
+    public UUID patientId() {
+        return patientId;
+    }
+
+    public UUID episodeId() {
+        return episodeId;
     }
 
     CurrentStaff clinician() {
@@ -70,6 +83,21 @@ final class PlanScenario {
     /** Settings like the page's defaults: no target, 3 sessions per step at 3 a week, Band 2 dose 3 × 10 @ 4. */
     PlanSettings settings(PlanDrafting drafting) {
         return drafting.defaults(clinician(), TWO_HAND_LOW_PENDULUM, LocalDate.now().minusDays(8));
+    }
+
+    /**
+     * For tests outside this package: the plan generated with the {@link #settings} defaults (taken from the plan
+     * page, which offers the same), issued, and shared with the clinic's trainer on the patient's consent.
+     */
+    public UUID issuedAndSharedPlan(Plans plans, Patients patients) {
+        PlanSettings d = plans.page(clinician(), episodeId).defaults();
+        UUID planId = plans.generate(clinician(), episodeId, new PlanSettings(TWO_HAND_LOW_PENDULUM, d.target(),
+                d.continueProvisionally(), d.stepUnit(), d.stepLength(), d.sessionsPerWeek(),
+                LocalDate.now().minusDays(8), d.doses()));
+        plans.issue(clinician(), planId, plans.page(clinician(), episodeId).draft().lockVersion());
+        consentForTrainer(patients);
+        plans.share(clinician(), planId, trainer().staffId());
+        return planId;
     }
 
     /** The patient's consent to share with the clinic's trainer, recorded by e-mail. */

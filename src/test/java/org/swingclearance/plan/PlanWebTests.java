@@ -137,6 +137,17 @@ class PlanWebTests extends PostgresTestBase {
                 .andExpect(status().is(expected == 302 ? 200 : expected));
     }
 
+    /** The page before any plan still shows the patient: it is audited as a read of the episode, naming the patient. */
+    @Test
+    void thePlanPageOfAnEpisodeWithoutAPlanIsAuditedToo() throws Exception {
+        UUID patient = data.patient(s.clinic);
+        UUID episode = data.shoulderEpisode(s.clinic, patient);
+        mvc.perform(get("/episodes/{e}/plan", episode).with(data.as(s.clinician()))).andExpect(status().isOk());
+        assertThat(jdbc.queryForObject("select count(*) from audit_event where action = 'PLAN_READ'"
+                + " and object_type = 'Episode' and object_id = ? and patient_id = ? and actor_id = ?",
+                Integer.class, episode.toString(), patient, s.clinician().staffId())).isEqualTo(1);
+    }
+
     @Test
     void theClinicianPlanPageIsForClinicians() throws Exception {
         mvc.perform(get("/episodes/{e}/plan", s.episodeId).with(data.as(s.clinician())))
