@@ -33,6 +33,7 @@ class ReadmeRunCommandTests {
             port = socket.getLocalPort();
         }
         Path dataDir = Path.of("target", "run-command-postgres").toAbsolutePath();
+        deleteRecursively(dataDir); // a fresh server each run: the test checks start-up, not an old schema
         Path log = Path.of("target", "run-command.log").toAbsolutePath();
         Files.createDirectories(log.getParent());
         ProcessBuilder builder = new ProcessBuilder(List.of("./mvnw", "-B", "-q", "spring-boot:test-run",
@@ -89,6 +90,17 @@ class ReadmeRunCommandTests {
                 .header("Content-Type", "application/x-www-form-urlencoded").header("Cookie", cookie)
                 .POST(HttpRequest.BodyPublishers.ofString(form)).build(), HttpResponse.BodyHandlers.ofString());
         return signIn.statusCode() == 302 && signIn.headers().firstValue("Location").orElse("").endsWith("/");
+    }
+
+    private static void deleteRecursively(Path dir) throws IOException {
+        if (!Files.exists(dir)) {
+            return;
+        }
+        try (var paths = Files.walk(dir)) {
+            for (Path p : paths.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.delete(p);
+            }
+        }
     }
 
     private static String tail(Path log) throws IOException {
