@@ -1,12 +1,11 @@
 package org.swingclearance.audit;
 
-import java.nio.ByteBuffer;
-import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.HexFormat;
+import org.swingclearance.web.LengthPrefixed;
 
 /**
  * The canonical encoding and SHA-256 hash of an audit row: the previous hash, then every field in a fixed
@@ -53,17 +52,11 @@ public final class AuditHashing {
 
     /** A time as integer microseconds since the epoch, independent of any session time zone or date style. */
     public static long micros(Instant t) {
-        return Math.addExact(Math.multiplyExact(t.getEpochSecond(), 1_000_000L), t.getNano() / 1_000);
+        return LengthPrefixed.epochMicros(t);
     }
 
     private static void field(MessageDigest sha, Object value) {
-        if (value == null) {
-            sha.update(ByteBuffer.allocate(4).putInt(-1).array());
-            return;
-        }
-        byte[] bytes = value.toString().getBytes(StandardCharsets.UTF_8);
-        sha.update(ByteBuffer.allocate(4).putInt(bytes.length).array());
-        sha.update(bytes);
+        sha.update(LengthPrefixed.encode(value));
     }
 
     private static MessageDigest sha256() {

@@ -1,6 +1,5 @@
 package org.swingclearance.audit;
 
-import java.nio.ByteBuffer;
 import java.nio.charset.StandardCharsets;
 import java.security.GeneralSecurityException;
 import java.security.MessageDigest;
@@ -9,6 +8,7 @@ import java.util.UUID;
 import javax.crypto.Mac;
 import javax.crypto.spec.SecretKeySpec;
 import org.springframework.stereotype.Component;
+import org.swingclearance.web.LengthPrefixed;
 
 /**
  * HMAC-SHA256 over a checkpoint (chain, seq, row hash, time, key id) with the configured secret. The key id is
@@ -51,9 +51,7 @@ public class CheckpointSigner {
     }
 
     private static void field(Mac mac, String value) {
-        byte[] bytes = value.getBytes(StandardCharsets.UTF_8);
-        mac.update(ByteBuffer.allocate(4).putInt(bytes.length).array());
-        mac.update(bytes);
+        mac.update(LengthPrefixed.encode(value));
     }
 
     private static String fingerprint(byte[] key) {

@@ -1,12 +1,11 @@
 package org.swingclearance.screening;
 
-import java.nio.ByteBuffer;
-import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.time.Instant;
 import java.util.Map;
 import java.util.TreeMap;
+import org.swingclearance.web.LengthPrefixed;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.JsonNodeFactory;
@@ -80,17 +79,11 @@ public final class ScreeningContentHash {
     }
 
     private static Long micros(Instant t) {
-        return t == null ? null : Math.addExact(Math.multiplyExact(t.getEpochSecond(), 1_000_000L), t.getNano() / 1_000);
+        return t == null ? null : LengthPrefixed.epochMicros(t);
     }
 
     private static void field(MessageDigest sha, Object value) {
-        if (value == null) {
-            sha.update(ByteBuffer.allocate(4).putInt(-1).array());
-            return;
-        }
-        byte[] bytes = value.toString().getBytes(StandardCharsets.UTF_8);
-        sha.update(ByteBuffer.allocate(4).putInt(bytes.length).array());
-        sha.update(bytes);
+        sha.update(LengthPrefixed.encode(value));
     }
 
     private static MessageDigest sha256() {
