@@ -12,13 +12,13 @@ import java.util.Set;
  * (mean 23.0, §2.1), trunk 120/150/80/90 s (§3.1), ASLR 2 + 1 (§3.3), Schober 4.0 cm (§3.5), QuickDASH Σ29 (40.91,
  * §4.1), ODI Σ15 (30 %, §4.2), SPADI 25/26 (39.23 %, §4.3), TSK-11 Σ24 (§4.5). The right side is involved.
  */
-final class FullScreening {
+public final class FullScreening {
 
     private FullScreening() {
     }
 
     /** Every form field by key, as a clinician would type it. */
-    static Map<String, String> typed() {
+    public static Map<String, String> typed() {
         Map<String, String> v = new LinkedHashMap<>();
         v.put("PAIN_AT_REST", "2");
         v.put("PAIN_DURING_MOVEMENT", "4");
