@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import java.util.UUID;
+import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.data.domain.Page;
 import org.springframework.data.domain.PageRequest;
 import org.springframework.stereotype.Service;
@@ -33,10 +34,13 @@ public class Patients {
     private final RedFlagCheckRepository redFlagChecks;
     private final ReferralRepository referrals;
     private final AuditLog audit;
+    private final ApplicationEventPublisher events;
     private final Clock clock;
 
     Patients(PatientRepository patients, EpisodeRepository episodes, ShareConsentRepository consents,
-             RedFlagCheckRepository redFlagChecks, ReferralRepository referrals, AuditLog audit, Clock clock) {
+             RedFlagCheckRepository redFlagChecks, ReferralRepository referrals, AuditLog audit,
+             ApplicationEventPublisher events, Clock clock) {
+        this.events = events;
         this.patients = patients;
         this.episodes = episodes;
         this.consents = consents;
@@ -183,6 +187,7 @@ public class Patients {
                 .orElseThrow(() -> denied(staff, "CONSENT_WITHDRAW", "ShareConsent", consentId));
         consent.withdraw(on);
         audit.record(staff, "CONSENT_WITHDRAW", "ShareConsent", consentId, patientId, null);
+        events.publishEvent(new ConsentWithdrawn(staff, patientId, consentId));
     }
 
     private EpisodeSummary summarise(UUID clinicId, Episode e) {

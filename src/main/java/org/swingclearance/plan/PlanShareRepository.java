@@ -15,5 +15,7 @@ interface PlanShareRepository extends JpaRepository<PlanShare, UUID> {
     Optional<PlanShare> findByClinicIdAndPlanIdAndTrainerIdAndUnsharedAtIsNull(UUID clinicId, UUID planId,
                                                                               UUID trainerId);
 
+    List<PlanShare> findByClinicIdAndConsentIdAndUnsharedAtIsNull(UUID clinicId, UUID consentId);
+
     List<PlanShare> findByClinicIdAndTrainerIdAndUnsharedAtIsNullOrderBySharedAtDesc(UUID clinicId, UUID trainerId);
 }

@@ -6,7 +6,9 @@ import java.time.Instant;
 import java.util.List;
 import java.util.Locale;
 import java.util.UUID;
+import org.springframework.context.event.EventListener;
 import org.springframework.stereotype.Component;
+import org.swingclearance.audit.AuditDetail;
 import org.swingclearance.audit.AuditLog;
 import org.swingclearance.audit.AuditOutcome;
 import org.swingclearance.identity.CurrentStaff;
@@ -17,6 +19,7 @@ import org.swingclearance.identity.StaffRole;
 import org.swingclearance.identity.StaffView;
 import org.swingclearance.identity.UnitSystem;
 import org.swingclearance.patient.ConsentView;
+import org.swingclearance.patient.ConsentWithdrawn;
 import org.swingclearance.patient.Patients;
 import org.swingclearance.web.InvalidStateException;
 import org.swingclearance.web.NotFoundException;
@@ -98,6 +101,21 @@ class PlanSharing {
         shares.saveAndFlush(share);
         audit.record(clinician, "PLAN_UNSHARE", "Plan", planId, plan.getPatientId(),
                 "share=" + shareId + ",trainer=" + share.getTrainerId());
+    }
+
+    /**
+     * A withdrawn consent ends, in the same transaction, every active share that rested on it: access already ends
+     * with the consent, and the trail then shows the unshare (the manager's share reports read PLAN_UNSHARE).
+     */
+    @EventListener
+    void endSharesOf(ConsentWithdrawn withdrawn) {
+        CurrentStaff by = withdrawn.by();
+        for (PlanShare share : shares.findByClinicIdAndConsentIdAndUnsharedAtIsNull(by.clinicId(), withdrawn.consentId())) {
+            share.end(by.staffId(), clock.instant());
+            shares.saveAndFlush(share);
+            audit.record(by, "PLAN_UNSHARE", "Plan", share.getPlanId(), share.getPatientId(),
+                    AuditDetail.of("share", share.getId(), "trainer", share.getTrainerId(), "reason", "consent withdrawn"));
+        }
     }
 
     List<ShareView> sharesOf(CurrentStaff clinician, GradedPlan plan) {

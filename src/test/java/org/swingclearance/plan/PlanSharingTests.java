@@ -113,6 +113,13 @@ class PlanSharingTests extends PostgresTestBase {
         assertThat(plans.isSharedWith(s.trainer(), planId)).isTrue();
         patients.withdrawConsent(s.clinician(), s.patientId, consent, LocalDate.now());
         assertThat(plans.isSharedWith(s.trainer(), planId)).isFalse();
+        // the share itself is ended and the trail shows the unshare (the manager's share report reads it)
+        assertThat(jdbc.queryForObject("select count(*) from plan_share where plan_id = ? and unshared_at is null",
+                Integer.class, planId)).isZero();
+        assertThat(jdbc.queryForList("select detail from audit_event where object_id = ? and action = 'PLAN_UNSHARE'"
+                + " order by seq", String.class, planId.toString()))
+                .hasSize(2) // the clinician's unshare above, then the one the withdrawal made
+                .last().asString().contains("consent withdrawn");
         assertThat(plans.sharedWith(s.trainer())).isEmpty();
         assertThatThrownBy(() -> plans.currentIssued(s.trainer(), s.episodeId)).isInstanceOf(NotFoundException.class);
     }
