@@ -1,9 +1,5 @@
 package org.swingclearance.support;
 
-import org.flywaydb.core.Flyway;
-import org.springframework.boot.flyway.autoconfigure.FlywayMigrationStrategy;
-import org.springframework.boot.test.context.TestConfiguration;
-import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Import;
 import org.springframework.test.context.DynamicPropertyRegistry;
 import org.springframework.test.context.DynamicPropertySource;
@@ -15,7 +11,7 @@ import org.testcontainers.postgresql.PostgreSQLContainer;
  * Testcontainers container where Docker runs, else the local server at 127.0.0.1:5432 (database app_test, which
  * {@code .ci/run} prepares). Flyway cleans and migrates once per Spring context.
  */
-@Import(PostgresTestBase.CleanMigrate.class)
+@Import(CleanMigrateConfig.class)
 public abstract class PostgresTestBase {
 
     private static final PostgreSQLContainer CONTAINER = startContainerIfUseful();
@@ -47,18 +43,5 @@ public abstract class PostgresTestBase {
     private static String env(String name, String fallback) {
         String value = System.getenv(name);
         return value == null || value.isBlank() ? fallback : value;
-    }
-
-    /** Clean + migrate: the local server keeps data between runs, every context starts from an empty schema. */
-    @TestConfiguration(proxyBeanMethods = false)
-    static class CleanMigrate {
-
-        @Bean
-        FlywayMigrationStrategy cleanMigrate() {
-            return (Flyway flyway) -> {
-                flyway.clean();
-                flyway.migrate();
-            };
-        }
     }
 }
