@@ -95,63 +95,47 @@ class PlanController {
     @PostMapping("/plans/{planId}/adjustments/clear")
     String clearAdjustments(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID planId,
                             @RequestParam long lockVersion, RedirectAttributes redirect) {
-        UUID episodeId = plans.episodeOf(me.staff(), planId);
-        try {
-            plans.clearAdjustments(me.staff(), planId, lockVersion);
-            redirect.addFlashAttribute("flash", "plan.adjusted.flash");
-        } catch (InvalidStateException refused) {
-            return notice(redirect, refused, episodeId);
-        }
-        return "redirect:/episodes/" + episodeId + "/plan";
+        return onPlan(me.staff(), planId, "plan.adjusted.flash", redirect,
+                () -> plans.clearAdjustments(me.staff(), planId, lockVersion));
     }
 
     @PostMapping("/plans/{planId}/issue")
     String issue(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID planId,
                  @RequestParam long lockVersion, RedirectAttributes redirect) {
-        UUID episodeId = plans.episodeOf(me.staff(), planId);
-        try {
-            plans.issue(me.staff(), planId, lockVersion);
-            redirect.addFlashAttribute("flash", "plan.issued.flash");
-        } catch (InvalidStateException refused) {
-            return notice(redirect, refused, episodeId);
-        }
-        return "redirect:/episodes/" + episodeId + "/plan";
+        return onPlan(me.staff(), planId, "plan.issued.flash", redirect,
+                () -> plans.issue(me.staff(), planId, lockVersion));
     }
 
     @PostMapping("/plans/{planId}/revise")
     String revise(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID planId,
                   RedirectAttributes redirect) {
-        UUID episodeId = plans.episodeOf(me.staff(), planId);
-        try {
-            plans.revise(me.staff(), planId);
-            redirect.addFlashAttribute("flash", "plan.generated.flash");
-        } catch (InvalidStateException refused) {
-            return notice(redirect, refused, episodeId);
-        } catch (PlanSettingsRejected rejected) {
-            return notice(redirect, new InvalidStateException(rejected.messageKey(), rejected.args()), episodeId);
-        }
-        return "redirect:/episodes/" + episodeId + "/plan";
+        return onPlan(me.staff(), planId, "plan.generated.flash", redirect,
+                () -> plans.revise(me.staff(), planId));
     }
 
     @PostMapping("/plans/{planId}/discard")
     String discard(@AuthenticationPrincipal StaffPrincipal me, @PathVariable UUID planId,
                    @RequestParam long lockVersion, RedirectAttributes redirect) {
-        UUID episodeId = plans.episodeOf(me.staff(), planId);
-        try {
-            plans.discardDraft(me.staff(), planId, lockVersion);
-            redirect.addFlashAttribute("flash", "plan.discarded.flash");
-        } catch (InvalidStateException refused) {
-            return notice(redirect, refused, episodeId);
-        }
-        return "redirect:/episodes/" + episodeId + "/plan";
+        return onPlan(me.staff(), planId, "plan.discarded.flash", redirect,
+                () -> plans.discardDraft(me.staff(), planId, lockVersion));
     }
 
     private String adjust(CurrentStaff staff, UUID planId, long lockVersion, int number, AdjustmentKind kind,
                           RedirectAttributes redirect) {
+        return onPlan(staff, planId, "plan.adjusted.flash", redirect,
+                () -> plans.adjust(staff, planId, lockVersion, number, kind));
+    }
+
+    /**
+     * Runs one change of a plan and goes back to its page: with the flash message when done, with the reason when
+     * the change was refused (nothing was changed then).
+     */
+    private String onPlan(CurrentStaff staff, UUID planId, String flashKey, RedirectAttributes redirect,
+                          Runnable change) {
         UUID episodeId = plans.episodeOf(staff, planId);
         try {
-            plans.adjust(staff, planId, lockVersion, number, kind);
-            redirect.addFlashAttribute("flash", "plan.adjusted.flash");
+            change.run();
+            redirect.addFlashAttribute("flash", flashKey);
         } catch (InvalidStateException refused) {
             return notice(redirect, refused, episodeId);
         } catch (PlanSettingsRejected rejected) {
